@@ -1,0 +1,2 @@
+// Vitest runs server modules outside Next.js; 'server-only' would throw there.
+export {};
