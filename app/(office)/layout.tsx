@@ -1,0 +1,7 @@
+import { SignedInShell } from '@/components/ui/signed-in-shell';
+
+export const dynamic = 'force-dynamic';
+
+export default function OfficeLayout({ children }: { children: React.ReactNode }) {
+  return <SignedInShell>{children}</SignedInShell>;
+}

@@ -1,0 +1,32 @@
+import type { Metadata, Viewport } from 'next';
+import localFont from 'next/font/local';
+import { Providers } from '@/components/providers';
+import './globals.css';
+
+// Inter ships with the app from an npm package; nothing is fetched from a font service.
+const body = localFont({
+  src: [
+    { path: '../node_modules/@fontsource-variable/inter/files/inter-latin-wght-normal.woff2', style: 'normal' },
+    { path: '../node_modules/@fontsource-variable/inter/files/inter-latin-ext-wght-normal.woff2', style: 'normal' },
+  ],
+  variable: '--font-body',
+  display: 'swap',
+});
+
+export const metadata: Metadata = {
+  title: { default: 'Rungbook', template: '%s · Rungbook' },
+  description: 'Lattice and solution energetics for ionic-salt plants: cycles, model checks, batch heat, calorimetry.',
+  applicationName: 'Rungbook',
+};
+
+export const viewport: Viewport = { themeColor: '#1d554d', width: 'device-width', initialScale: 1 };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={body.variable}>
+      <body className="min-h-screen font-sans">
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

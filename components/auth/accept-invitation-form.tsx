@@ -1,0 +1,61 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import Link from 'next/link';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { postJson } from '@/components/ui/post-json';
+import { acceptInvitationSchema } from '@/lib/validation/auth';
+
+type Values = { token: string; password: string; confirm: string };
+
+export function AcceptInvitationForm({ token }: { token: string }) {
+  const [done, setDone] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const form = useForm<Values>({ resolver: zodResolver(acceptInvitationSchema), defaultValues: { token, password: '', confirm: '' } });
+  const { errors, isSubmitting } = form.formState;
+  const onSubmit = form.handleSubmit(async (values) => {
+    setError(null);
+    const res = await postJson<{ email: string }>('/api/v1/auth/invitation', values);
+    if (res.ok) setDone(res.data.email);
+    else setError(res.message);
+  });
+  if (done) {
+    return (
+      <div className="space-y-4">
+        <p role="status">Your password is set for {done}. You can sign in now.</p>
+        <Link href="/sign-in" className="btn-primary w-full">
+          Sign in
+        </Link>
+      </div>
+    );
+  }
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-4">
+      <input type="hidden" {...form.register('token')} />
+      <div>
+        <label htmlFor="password" className="field-label">
+          New password (at least 10 characters)
+        </label>
+        <input id="password" type="password" autoComplete="new-password" className="field-input" {...form.register('password')} />
+        {errors.password ? <p className="field-error">{errors.password.message}</p> : null}
+      </div>
+      <div>
+        <label htmlFor="confirm" className="field-label">
+          The same password again
+        </label>
+        <input id="confirm" type="password" autoComplete="new-password" className="field-input" {...form.register('confirm')} />
+        {errors.confirm ? <p className="field-error">{errors.confirm.message}</p> : null}
+      </div>
+      {errors.token ? <p className="field-error">{errors.token.message}</p> : null}
+      {error ? (
+        <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">
+          {error}
+        </p>
+      ) : null}
+      <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
+        Set password
+      </button>
+    </form>
+  );
+}

@@ -1,0 +1,55 @@
+import Link from 'next/link';
+import { can } from '@/lib/auth/permissions';
+import type { UserActor } from '@/lib/auth/current';
+import { RungbookMark } from './rungbook-mark';
+import { NavLinks, type NavItem } from './nav-links';
+import { SignOutButton } from './sign-out-button';
+
+export interface AppShellProps {
+  user: UserActor;
+  siteName: string;
+  children: React.ReactNode;
+}
+
+export function AppShell({ user, siteName, children }: AppShellProps) {
+  const items: NavItem[] = [
+    { href: '/', label: 'Today' },
+    { href: '/sheets', label: 'Sheets' },
+    { href: '/reference', label: 'Reference' },
+    { href: '/bench', label: 'Bench log' },
+    ...(can(user.role, 'reconcile.resolve') ? [{ href: '/reconcile', label: 'Reconcile' }] : []),
+    ...(can(user.role, 'site.manage') ? [{ href: '/admin', label: 'Admin' }] : []),
+  ];
+  return (
+    <div className="min-h-screen md:grid md:grid-cols-[13rem_1fr]">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:p-2">
+        Skip to content
+      </a>
+      <header className="border-b border-rule bg-white md:min-h-screen md:border-b-0 md:border-r">
+        <div className="flex items-center gap-3 px-4 py-3">
+          <Link href="/" className="flex min-h-touch items-center gap-2 font-semibold tracking-tight">
+            <RungbookMark />
+            <span className="text-lg">Rungbook</span>
+          </Link>
+        </div>
+        <NavLinks items={items} />
+        <div className="hidden border-t border-rule px-4 py-3 text-sm md:block">
+          <p className="font-medium">{user.displayName}</p>
+          <p className="text-ink-soft">
+            {user.role} · {siteName}
+          </p>
+          <SignOutButton className="btn-quiet mt-2 w-full" />
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-5xl px-4 py-6 md:px-8">
+        <div className="mb-4 flex items-center justify-between text-sm text-ink-soft md:hidden">
+          <span>
+            {user.displayName} · {user.role}
+          </span>
+          <SignOutButton className="btn-quiet" />
+        </div>
+        {children}
+      </main>
+    </div>
+  );
+}

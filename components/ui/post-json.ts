@@ -1,0 +1,15 @@
+/** Same-origin JSON request from our pages, with the server's error message on failure. */
+export type JsonResult<T = unknown> =
+  | { ok: true; status: number; data: T }
+  | { ok: false; status: number; message: string; fields?: { field: string; message: string }[] };
+
+export async function postJson<T = unknown>(url: string, body: unknown, method = 'POST'): Promise<JsonResult<T>> {
+  try {
+    const res = await fetch(url, { method, headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) });
+    const data = await res.json().catch(() => null);
+    if (res.ok) return { ok: true, status: res.status, data: data as T };
+    return { ok: false, status: res.status, message: data?.error?.message ?? `The server answered ${res.status}.`, fields: data?.error?.fields };
+  } catch {
+    return { ok: false, status: 0, message: 'No connection to the server. Check the network and try again.' };
+  }
+}
