@@ -1,0 +1,2 @@
+// The Drizzle schema, one file per feature; drizzle.config.ts reads every file in this folder.
+export * from './foundation';
