@@ -25,6 +25,8 @@ const csp = [
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   reactStrictMode: true,
+  // Parallel test runs on one machine build into their own folders (lib/ops/test.sh).
+  distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
   typedRoutes: false,
   async headers() {

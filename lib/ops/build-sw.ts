@@ -3,12 +3,13 @@
 import { build } from 'esbuild';
 import { injectManifest } from 'workbox-build';
 
-const tmp = '.next/sw.bundle.js';
+const dist = process.env.NEXT_DIST_DIR || '.next';
+const tmp = `${dist}/sw.bundle.js`;
 await build({ entryPoints: ['sw/sw.ts'], bundle: true, format: 'iife', minify: true, target: 'es2020', outfile: tmp, define: { 'process.env.NODE_ENV': '"production"' } });
 const { count, size, warnings } = await injectManifest({
   swSrc: tmp,
   swDest: 'public/sw.js',
-  globDirectory: '.next',
+  globDirectory: dist,
   globPatterns: ['static/**/*.{js,css,woff2,svg,png}'],
   modifyURLPrefix: { 'static/': '/_next/static/' },
   maximumFileSizeToCacheInBytes: 5 * 1024 * 1024,
