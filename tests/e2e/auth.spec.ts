@@ -1,0 +1,56 @@
+import AxeBuilder from '@axe-core/playwright';
+import { expect, test } from '@playwright/test';
+import { DEMO, DEMO_PASSWORD, waitForMail } from '../support/http';
+
+test('the e-mailed sign-in link arrives in the local capture and signs the user in', async ({ page }) => {
+  const since = Date.now() - 1000;
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(DEMO.qcTechnician);
+  await page.getByRole('button', { name: 'E-mail me a sign-in link instead' }).click();
+  await expect(page.getByRole('status')).toContainText('sign-in link is on its way');
+  const mail = await waitForMail(DEMO.qcTechnician, 'sign-in link', since);
+  const link = /https?:\/\/\S+/.exec(mail.text)![0];
+  await page.goto(link);
+  await page.getByRole('button', { name: 'Sign in to Rungbook' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Calder Reach Works' })).toBeVisible();
+  await expect(page.getByText('Signed in as QC lab technician (technician)')).toBeVisible();
+
+  // the same link a second time is refused plainly
+  await page.context().clearCookies();
+  await page.goto(link);
+  await page.getByRole('button', { name: 'Sign in to Rungbook' }).click();
+  await expect(page.getByRole('alert')).toContainText('already been used');
+});
+
+test('a wrong password shows the generic message and keeps what was typed', async ({ page }) => {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(DEMO.supervisor);
+  await page.getByLabel('Password').fill('not the password');
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await expect(page.getByRole('alert')).toHaveText('The e-mail or password is not right.');
+  await expect(page.getByLabel('E-mail')).toHaveValue(DEMO.supervisor);
+});
+
+test('an admin signs in, reaches Admin and the page has no serious accessibility problems', async ({ page }) => {
+  await page.goto('/admin');
+  await expect(page).toHaveURL(/\/sign-in\?next=%2Fadmin/);
+  await page.getByLabel('E-mail').fill(DEMO.admin);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await expect(page.getByRole('heading', { name: 'Admin' })).toBeVisible();
+  await expect(page.getByRole('cell', { name: DEMO.technician })).toBeVisible();
+  const results = await new AxeBuilder({ page }).analyze();
+  const serious = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+  expect(serious.map((v) => `${v.id}: ${v.help}`)).toEqual([]);
+});
+
+test('a technician does not see Admin or Reconcile and is turned away from them', async ({ page }) => {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(DEMO.technician);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Sheets' })).toBeVisible();
+  await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Admin' })).toHaveCount(0);
+  await page.goto('/admin');
+  await expect(page.getByRole('heading', { name: 'Not allowed for your role' })).toBeVisible();
+});
