@@ -21,13 +21,13 @@ apt_install() {
 }
 
 ensure_node_modules() {
-  # npm ci when the lock file changed since the last install (or nothing is installed).
+  # npm ci when nothing is installed or the installed tree no longer matches the lock file.
   local stamp="node_modules/.rungbook-lock"
-  if [ ! -d node_modules ] || ! cmp -s package-lock.json "$stamp" 2>/dev/null; then
-    log "installing npm packages (npm ci)"
-    npm ci --no-audit --no-fund --loglevel=error
-    cp package-lock.json "$stamp"
-  fi
+  if [ -d node_modules ] && cmp -s package-lock.json "$stamp" 2>/dev/null; then return; fi
+  if [ -d node_modules ] && npm ls --depth=0 >/dev/null 2>&1; then cp package-lock.json "$stamp"; return; fi
+  log "installing npm packages (npm ci)"
+  npm ci --no-audit --no-fund --loglevel=error
+  cp package-lock.json "$stamp"
 }
 
 ensure_mariadb_installed() {
