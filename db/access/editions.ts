@@ -1,0 +1,130 @@
+import 'server-only';
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import { db, type Db, type Tx } from '@/db/client';
+import { editions, editionValues, refSpecies, users, type EditionState } from '@/db/schema';
+import type { HydrationScale, Phase, PropertyCode, ReferenceValue } from '@/lib/reference/properties';
+import { AppError } from '@/lib/server/errors';
+
+export type EditionRow = typeof editions.$inferSelect;
+
+/** An edition as the API and other features see it (dates as ISO strings). */
+export interface Edition {
+  id: string;
+  siteId: string;
+  number: number;
+  state: EditionState;
+  baseEditionId: string | null;
+  changeSummary: string;
+  authorUserId: string;
+  approverUserId: string | null;
+  rejectedByUserId: string | null;
+  rejectionReason: string | null;
+  createdAt: string;
+  updatedAt: string;
+  submittedAt: string | null;
+  rejectedAt: string | null;
+  inForceAt: string | null;
+  retiredAt: string | null;
+  revision: number;
+  valueCount: number;
+  contentHash: string | null;
+  /** Strong validator of the edition's values: changes whenever a value changes. */
+  etag: string;
+}
+
+export function editionEtag(row: Pick<EditionRow, 'id' | 'revision'>): string {
+  return `"ed-${row.id}-r${row.revision}"`;
+}
+
+const iso = (d: Date | null) => (d ? d.toISOString() : null);
+
+export function publicEdition(row: EditionRow): Edition {
+  return {
+    id: row.id,
+    siteId: row.siteId,
+    number: row.number,
+    state: row.state,
+    baseEditionId: row.baseEditionId,
+    changeSummary: row.changeSummary,
+    authorUserId: row.authorUserId,
+    approverUserId: row.approverUserId,
+    rejectedByUserId: row.rejectedByUserId,
+    rejectionReason: row.rejectionReason,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    submittedAt: iso(row.submittedAt),
+    rejectedAt: iso(row.rejectedAt),
+    inForceAt: iso(row.inForceAt),
+    retiredAt: iso(row.retiredAt),
+    revision: row.revision,
+    valueCount: row.valueCount,
+    contentHash: row.contentHash,
+    etag: editionEtag(row),
+  };
+}
+
+/** The edition in force at a site, or null when the site has none yet. */
+export async function getEditionInForce(siteId: string, tx: Db | Tx = db()): Promise<(Edition & { state: 'in_force' }) | null> {
+  const [row] = await tx.select().from(editions).where(and(eq(editions.siteId, siteId), eq(editions.state, 'in_force')));
+  return row ? (publicEdition(row) as Edition & { state: 'in_force' }) : null;
+}
+
+/** An edition of the caller's site (any state — retired editions stay readable), or 404. */
+export async function getEditionOrThrow(siteId: string, editionId: string, tx: Db | Tx = db()): Promise<Edition> {
+  const [row] = await tx.select().from(editions).where(and(eq(editions.id, editionId), eq(editions.siteId, siteId)));
+  if (!row) throw new AppError('not_found', 'No such reference edition on this site.');
+  return publicEdition(row);
+}
+
+/** The values of one edition as ReferenceValues (decimals as strings), in species order. */
+export async function getEditionValues(editionId: string, tx: Db | Tx = db()): Promise<ReferenceValue[]> {
+  const rows = await tx
+    .select({
+      species: refSpecies.formula,
+      phase: refSpecies.phase,
+      charge: refSpecies.charge,
+      property: editionValues.property,
+      value: editionValues.value,
+      uncertainty: editionValues.uncertainty,
+      unit: editionValues.unit,
+      coordination: editionValues.coordination,
+      structure: editionValues.structure,
+      scale: editionValues.scale,
+      source: editionValues.source,
+      fromMemory: editionValues.fromMemory,
+      note: editionValues.note,
+    })
+    .from(editionValues)
+    .innerJoin(refSpecies, eq(refSpecies.id, editionValues.speciesId))
+    .where(eq(editionValues.editionId, editionId))
+    .orderBy(asc(editionValues.valueKey));
+  return rows.map((r) => ({
+    species: r.species,
+    phase: r.phase as Phase,
+    charge: r.charge,
+    property: r.property as PropertyCode,
+    value: r.value,
+    uncertainty: r.uncertainty,
+    unit: r.unit,
+    ...(r.coordination !== null ? { coordination: r.coordination } : {}),
+    ...(r.structure !== null ? { structure: r.structure } : {}),
+    ...(r.scale !== null ? { scale: r.scale as HydrationScale } : {}),
+    source: r.source,
+    fromMemory: r.fromMemory,
+    ...(r.note !== null ? { note: r.note } : {}),
+  }));
+}
+
+/** All editions of a site, newest number first. */
+export async function listEditions(siteId: string): Promise<Edition[]> {
+  const rows = await db().select().from(editions).where(eq(editions.siteId, siteId)).orderBy(asc(editions.number));
+  return rows.map(publicEdition).reverse();
+}
+
+/** Display names for the people named on editions (author, approver, rejecter). */
+export async function peopleNames(siteId: string, list: Edition[]): Promise<Record<string, string>> {
+  const ids = [...new Set(list.flatMap((e) => [e.authorUserId, e.approverUserId, e.rejectedByUserId]).filter((x): x is string => !!x))];
+  if (ids.length === 0) return {};
+  const rows = await db().select({ id: users.id, name: users.displayName }).from(users).where(and(eq(users.siteId, siteId), inArray(users.id, ids)));
+  return Object.fromEntries(rows.map((r) => [r.id, r.name]));
+}
