@@ -4,7 +4,7 @@ import nextTs from 'eslint-config-next/typescript';
 const config = [
   ...nextVitals,
   ...nextTs,
-  { ignores: ['.next/**', 'node_modules/**', 'public/**', '.data/**', 'drizzle/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**'] },
+  { ignores: ['.next/**', '.next-slot-*/**', 'backups/**', 'node_modules/**', 'public/**', '.data/**', 'drizzle/**', 'next-env.d.ts', 'test-results/**', 'playwright-report/**'] },
   {
     rules: {
       // We do not run the React Compiler; TanStack Table's hook is fine without its memoisation.
