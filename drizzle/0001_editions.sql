@@ -2,7 +2,7 @@ CREATE TABLE `edition_value_events` (
 	`id` varchar(36) NOT NULL,
 	`site_id` varchar(36) NOT NULL,
 	`edition_id` varchar(36) NOT NULL,
-	`value_key` varchar(191) NOT NULL,
+	`value_key` varchar(191) COLLATE utf8mb4_bin NOT NULL,
 	`action` enum('added','changed','removed') NOT NULL,
 	`before` json,
 	`after` json,
@@ -18,7 +18,7 @@ CREATE TABLE `edition_values` (
 	`species_id` varchar(36) NOT NULL,
 	`property` varchar(40) NOT NULL,
 	`coordination` int,
-	`value_key` varchar(191) NOT NULL,
+	`value_key` varchar(191) COLLATE utf8mb4_bin NOT NULL,
 	`value` varchar(40) NOT NULL,
 	`uncertainty` varchar(40),
 	`unit` varchar(24) NOT NULL,
@@ -67,7 +67,7 @@ CREATE TABLE `ref_properties` (
 --> statement-breakpoint
 CREATE TABLE `ref_species` (
 	`id` varchar(36) NOT NULL,
-	`formula` varchar(64) NOT NULL,
+	`formula` varchar(64) COLLATE utf8mb4_bin NOT NULL,
 	`phase` enum('cr','l','g','aq') NOT NULL,
 	`charge` int NOT NULL,
 	`created_at` datetime(3) NOT NULL,

@@ -38,6 +38,7 @@ export const refSpecies = mysqlTable(
   'ref_species',
   {
     id: id(),
+    // Binary collation (set in the migration): "Co" and "CO" are different species.
     formula: varchar('formula', { length: 64 }).notNull(),
     phase: mysqlEnum('phase', VALUE_PHASES).notNull(),
     charge: int('charge').notNull(),
@@ -90,7 +91,7 @@ export const editionValues = mysqlTable(
     speciesId: ref('species_id').notNull().references(() => refSpecies.id),
     property: varchar('property', { length: 40 }).notNull().references(() => refProperties.code),
     coordination: int('coordination'),
-    // species|phase|property|coordination — the identity of a value across editions.
+    // species|phase|property|coordination — the identity of a value across editions (binary collation, set in the migration).
     valueKey: varchar('value_key', { length: 191 }).notNull(),
     value: varchar('value', { length: 40 }).notNull(),
     uncertainty: varchar('uncertainty', { length: 40 }),

@@ -2,6 +2,7 @@
 import { pool } from '@/db/client';
 import { DEMO_AREAS, DEMO_PASSWORD, DEMO_SITE, DEMO_USERS } from './demo-site';
 import { ensureArea, ensureSite, ensureUser } from './ensure-site';
+import { seedEditions } from './editions';
 
 try {
   const site = await ensureSite(DEMO_SITE.code, DEMO_SITE.name);
@@ -9,6 +10,7 @@ try {
   let created = 0;
   for (const u of DEMO_USERS) if ((await ensureUser(site.id, { ...u, password: DEMO_PASSWORD })).created) created++;
   console.log(`demo site ${site.created ? 'created' : 'already present'}; ${created} new demo accounts`);
+  console.log(`reference editions ${(await seedEditions(site.id)).created ? 'seeded (No. 1 retired, No. 2 in force)' : 'already present: left as they are'}`);
 } catch (error) {
   console.error('seeding failed:', error);
   process.exitCode = 1;
