@@ -118,17 +118,22 @@ function lookupSpec(spec: StepSpec, lookup: ReferenceLookup | undefined): Looked
   return undefined;
 }
 
-export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
-  const salt = analyzeBinarySalt(input.formula, input.cationCharge);
-  const basis = input.basis ?? 'as-tabulated';
-  if (!(ENERGY_BASES as readonly string[]).includes(basis)) {
-    throw new ThermoInputError('out_of_range', 'basis', `basis must be one of ${ENERGY_BASES.join(', ')}.`);
-  }
-  const latticeConvention = input.latticeConvention ?? 'dissociation';
-  if (!(LATTICE_CONVENTIONS as readonly string[]).includes(latticeConvention)) {
-    throw new ThermoInputError('out_of_range', 'latticeConvention', `latticeConvention must be one of ${LATTICE_CONVENTIONS.join(', ')}.`);
-  }
-  const explicit = input.values ?? {};
+interface CycleLayout {
+  head: StepSpec[];
+  pathSpecs: StepSpec[];
+  pathRoute: BornHaberCycle['nonmetalRoute'];
+  atomizationSpec: StepSpec;
+  tail: StepSpec[];
+  latticeKey: string;
+}
+
+// Step layouts depend only on the salt and the basis, so they are built once and reused.
+const LAYOUT_CACHE = new Map<string, CycleLayout>();
+
+function cycleLayout(salt: BinarySalt, basis: EnergyBasis): CycleLayout {
+  const cacheKey = `${salt.formula}|${salt.cation.charge}|${basis}`;
+  const cached = LAYOUT_CACHE.get(cacheKey);
+  if (cached) return cached;
   const { cation, anion } = salt;
   const M = cation.symbol;
   const X = anion.symbol;
@@ -139,8 +144,8 @@ export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
   const zero = new Dec(0);
   const X2 = `${X}2`;
 
-  const specs: StepSpec[] = [];
-  specs.push({
+  const head: StepSpec[] = [];
+  head.push({
     key: `enthalpy_of_formation:${salt.formula}`,
     kind: 'enthalpy_of_formation',
     name: `Standard enthalpy of formation of ${salt.formula} (reversed)`,
@@ -151,7 +156,7 @@ export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
     coefficient: new Dec(-1),
     basisCorrection: zero,
   });
-  specs.push({
+  head.push({
     key: `enthalpy_of_atomization:${M}`,
     kind: 'enthalpy_of_atomization',
     name: `Enthalpy of atomization of ${M}`,
@@ -164,7 +169,7 @@ export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
     fallbacks: [{ species: M, phase: 'g', property: 'enthalpy_of_formation' }],
   });
   for (let k = 1; k <= cation.charge; k += 1) {
-    specs.push({
+    head.push({
       key: `ionization_energy_${k}:${M}`,
       kind: 'ionization_energy',
       name: `${ORDINAL[k - 1] ?? `${k}th`} ionization energy of ${M}`,
@@ -242,6 +247,55 @@ export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
     pathSpecs = [];
     pathRoute = 'atomization';
   }
+  const tail: StepSpec[] = [];
+  const latticeKey = `lattice_enthalpy:${salt.formula}`;
+  for (let k = 1; k <= -anion.charge; k += 1) {
+    tail.push({
+      key: `electron_gain_enthalpy_${k}:${X}`,
+      kind: 'electron_gain_enthalpy',
+      name: `${ORDINAL[k - 1] ?? `${k}th`} electron-gain enthalpy of ${X}`,
+      property: `electron_gain_enthalpy_${k}` as PropertyCode,
+      species: X,
+      phase: 'g',
+      process: `${ionText(X, -(k - 1))}(g) + e⁻ → ${ionText(X, -k)}(g)`,
+      coefficient: b,
+      basisCorrection: rtCorrection.negated(),
+    });
+  }
+  tail.push({
+    key: latticeKey,
+    kind: 'lattice_enthalpy',
+    name: `Lattice enthalpy of ${salt.formula}`,
+    property: null,
+    species: salt.formula,
+    phase: 'cr',
+    process: `${cation.count > 1 ? `${cation.count} ` : ''}${ionText(M, cation.charge)}(g) + ${anion.count > 1 ? `${anion.count} ` : ''}${ionText(X, anion.charge)}(g) → ${salt.formula}(cr)`,
+    coefficient: new Dec(-1),
+    basisCorrection: zero,
+  });
+
+  const layout: CycleLayout = { head, pathSpecs, pathRoute, atomizationSpec, tail, latticeKey };
+  if (LAYOUT_CACHE.size > 500) LAYOUT_CACHE.clear();
+  LAYOUT_CACHE.set(cacheKey, layout);
+  return layout;
+}
+
+export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
+  const salt = analyzeBinarySalt(input.formula, input.cationCharge);
+  const basis = input.basis ?? 'as-tabulated';
+  if (!(ENERGY_BASES as readonly string[]).includes(basis)) {
+    throw new ThermoInputError('out_of_range', 'basis', `basis must be one of ${ENERGY_BASES.join(', ')}.`);
+  }
+  const latticeConvention = input.latticeConvention ?? 'dissociation';
+  if (!(LATTICE_CONVENTIONS as readonly string[]).includes(latticeConvention)) {
+    throw new ThermoInputError('out_of_range', 'latticeConvention', `latticeConvention must be one of ${LATTICE_CONVENTIONS.join(', ')}.`);
+  }
+  const explicit = input.values ?? {};
+  const X = salt.anion.symbol;
+  const layout = cycleLayout(salt, basis);
+  const { head, pathSpecs, atomizationSpec, tail, latticeKey } = layout;
+  let pathRoute = layout.pathRoute;
+  const specs: StepSpec[] = [...head];
   const hasExplicit = (key: string): boolean => Object.prototype.hasOwnProperty.call(explicit, key);
   const explicitPath = pathSpecs.some((s) => hasExplicit(s.key));
   if (explicitPath && hasExplicit(atomizationSpec.key)) {
@@ -263,31 +317,7 @@ export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
     specs.push(...pathSpecs);
   }
 
-  for (let k = 1; k <= -anion.charge; k += 1) {
-    specs.push({
-      key: `electron_gain_enthalpy_${k}:${X}`,
-      kind: 'electron_gain_enthalpy',
-      name: `${ORDINAL[k - 1] ?? `${k}th`} electron-gain enthalpy of ${X}`,
-      property: `electron_gain_enthalpy_${k}` as PropertyCode,
-      species: X,
-      phase: 'g',
-      process: `${ionText(X, -(k - 1))}(g) + e⁻ → ${ionText(X, -k)}(g)`,
-      coefficient: b,
-      basisCorrection: rtCorrection.negated(),
-    });
-  }
-  const latticeKey = `lattice_enthalpy:${salt.formula}`;
-  specs.push({
-    key: latticeKey,
-    kind: 'lattice_enthalpy',
-    name: `Lattice enthalpy of ${salt.formula}`,
-    property: null,
-    species: salt.formula,
-    phase: 'cr',
-    process: `${cation.count > 1 ? `${cation.count} ` : ''}${ionText(M, cation.charge)}(g) + ${anion.count > 1 ? `${anion.count} ` : ''}${ionText(X, anion.charge)}(g) → ${salt.formula}(cr)`,
-    coefficient: new Dec(-1),
-    basisCorrection: zero,
-  });
+  specs.push(...tail);
 
   const keys = specs.map((s) => s.key);
   for (const key of Object.keys(explicit)) {
@@ -328,7 +358,21 @@ export function buildBornHaberCycle(input: BuildCycleInput): BornHaberCycle {
       uncertainty = null;
       source = null;
     }
-    return { ...spec, value, uncertainty, source, overridden };
+    return {
+      key: spec.key,
+      kind: spec.kind,
+      name: spec.name,
+      property: spec.property,
+      species: spec.species,
+      phase: spec.phase,
+      process: spec.process,
+      coefficient: spec.coefficient,
+      value,
+      basisCorrection: spec.basisCorrection,
+      uncertainty,
+      source,
+      overridden,
+    };
   });
   const missing = steps.filter((s) => s.value === null && s.key !== unknownKey).map((s) => s.key);
   return { salt, steps, basis, missing, unknownKey, nonmetalRoute: pathRoute };

@@ -106,7 +106,31 @@ function parseGroup(text: string, field: string): Record<string, number> {
   return counts;
 }
 
+// Parsed formulas are immutable and reused: the same few salts are parsed over and over.
+const PARSE_CACHE = new Map<string, ParsedFormula>();
+const PARSE_CACHE_LIMIT = 1000;
+
+function deepFreeze(parsed: ParsedFormula): ParsedFormula {
+  Object.freeze(parsed.elements);
+  Object.freeze(parsed.anhydrous);
+  Object.freeze(parsed.otherAdducts);
+  return Object.freeze(parsed);
+}
+
 export function parseFormula(input: unknown, field = 'formula'): ParsedFormula {
+  if (typeof input === 'string') {
+    const hit = PARSE_CACHE.get(input);
+    if (hit) return hit;
+  }
+  const parsed = deepFreeze(parseFormulaUncached(input, field));
+  if (typeof input === 'string') {
+    if (PARSE_CACHE.size >= PARSE_CACHE_LIMIT) PARSE_CACHE.clear();
+    PARSE_CACHE.set(input, parsed);
+  }
+  return parsed;
+}
+
+function parseFormulaUncached(input: unknown, field: string): ParsedFormula {
   if (typeof input !== 'string' || input.trim() === '') {
     throw new ThermoInputError('bad_formula', field, `${field} must be a chemical formula such as CaCl2 or CaCl2·6H2O.`);
   }
@@ -137,14 +161,19 @@ export function parseFormula(input: unknown, field = 'formula'): ParsedFormula {
 }
 
 /** Molar mass in g/mol from IUPAC abridged atomic weights (exact decimal sum). */
+const MOLAR_MASS_CACHE = new WeakMap<ParsedFormula, Dec>();
+
 export function molarMass(formula: string | ParsedFormula, field = 'formula'): Dec {
   const parsed = typeof formula === 'string' ? parseFormula(formula, field) : formula;
+  const cached = MOLAR_MASS_CACHE.get(parsed);
+  if (cached) return cached;
   let total = new Dec(0);
   for (const [symbol, count] of Object.entries(parsed.elements)) {
     const weight = ATOMIC_WEIGHTS[symbol];
     if (weight === undefined) throw new ThermoInputError('unknown_element', field, `No atomic weight for ${symbol}.`);
     total = total.plus(new Dec(weight).times(count));
   }
+  MOLAR_MASS_CACHE.set(parsed, total);
   return total;
 }
 

@@ -61,7 +61,22 @@ export function ionConfiguration(symbol: string, charge: number): string | undef
  * more or fewer than two elements, unknown charges and charges that do not balance — each with a
  * message that says why.
  */
+// Successful analyses are immutable and reused (the same salts come back again and again).
+const SALT_CACHE = new Map<string, BinarySalt>();
+
 export function analyzeBinarySalt(formula: unknown, statedCationCharge?: unknown, field = 'formula'): BinarySalt {
+  const cacheKey = typeof formula === 'string' && (statedCationCharge === undefined || typeof statedCationCharge === 'number') ? `${formula}|${String(statedCationCharge)}` : null;
+  const hit = cacheKey === null ? undefined : SALT_CACHE.get(cacheKey);
+  if (hit) return hit;
+  const salt = analyzeBinarySaltUncached(formula, statedCationCharge, field);
+  if (cacheKey !== null) {
+    if (SALT_CACHE.size > 1000) SALT_CACHE.clear();
+    SALT_CACHE.set(cacheKey, Object.freeze(salt));
+  }
+  return salt;
+}
+
+function analyzeBinarySaltUncached(formula: unknown, statedCationCharge: unknown, field: string): BinarySalt {
   const parsed = parseFormula(formula, field);
   if (parsed.charge !== 0) {
     throw new ThermoInputError('not_binary_ionic', field, `${parsed.text} carries a charge; give the neutral salt.`);

@@ -158,8 +158,17 @@ export interface ModelCheckResult {
   circularityNote: string | null;
 }
 
+const DECIMAL_TEXT = /^\s*[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?\s*$/;
+
+/** Float inputs of the models: finite and > 0; same refusals as the decimal parser, without its cost. */
 function positiveNumber(value: unknown, field: string): number {
-  return toDecPositive(value, field).toNumber();
+  let n: number;
+  if (typeof value === 'number') n = value;
+  else if (typeof value === 'string' && DECIMAL_TEXT.test(value)) n = Number(value);
+  else return toDecPositive(value, field).toNumber(); // raises the typed error for anything else
+  if (!Number.isFinite(n)) return toDecPositive(value, field).toNumber();
+  if (!(n > 0)) throw new ThermoInputError('out_of_range', field, `${field} must be greater than zero.`);
+  return n;
 }
 
 function bornExponentFor(salt: BinarySalt): number | undefined {
@@ -179,7 +188,7 @@ export function runModelCheck(input: ModelCheckInput): ModelCheckResult {
   const b = salt.anion.count;
   const skipped: ModelCheckResult['skipped'] = [];
   const models: ModelResult[] = [];
-  const cycle = input.cycleLatticeEnthalpy === undefined ? null : toDec(input.cycleLatticeEnthalpy, 'cycleLatticeEnthalpy').toNumber();
+  const cycle = input.cycleLatticeEnthalpy === undefined ? null : typeof input.cycleLatticeEnthalpy === 'number' && Number.isFinite(input.cycleLatticeEnthalpy) ? input.cycleLatticeEnthalpy : toDec(input.cycleLatticeEnthalpy, 'cycleLatticeEnthalpy').toNumber();
   if (cycle !== null && cycle <= 0) {
     throw new ThermoInputError('out_of_range', 'cycleLatticeEnthalpy', 'Give the cycle lattice enthalpy as a dissociation enthalpy (positive).');
   }

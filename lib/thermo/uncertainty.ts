@@ -8,16 +8,28 @@ export interface UncertainTerm {
   uncertainty: Dec | null;
 }
 
-/** u = sqrt(Σ (c_i·u_i)²); null when no term carries an uncertainty. Terms without one count as exact. */
+/**
+ * u = sqrt(Σ (c_i·u_i)²); null when no term carries an uncertainty. Terms without one count as exact.
+ * A single term is returned exactly (|c·u|); otherwise the square root is taken in floating point —
+ * an uncertainty needs two significant digits, not forty.
+ */
 export function combineInQuadrature(terms: readonly UncertainTerm[]): Dec | null {
   let sum = new Dec(0);
+  let nonZero = 0;
   let any = false;
+  let last = new Dec(0);
   for (const term of terms) {
     if (term.uncertainty === null) continue;
     any = true;
-    sum = sum.plus(term.coefficient.times(term.uncertainty).pow(2));
+    const cu = term.coefficient.times(term.uncertainty);
+    if (cu.isZero()) continue;
+    nonZero += 1;
+    last = cu.abs();
+    sum = sum.plus(cu.times(cu));
   }
-  return any ? sum.sqrt() : null;
+  if (!any) return null;
+  if (nonZero <= 1) return last;
+  return new Dec(Math.sqrt(sum.toNumber()));
 }
 
 export interface RoundedValue {
@@ -44,18 +56,18 @@ export function roundWithUncertainty(value: Dec, uncertainty: Dec | null, fallba
       text: uncertainty === null ? `${roundedValue} (no uncertainty given)` : roundedValue,
     };
   }
-  const exponent = uncertainty.abs().e; // power of ten of the first significant digit
-  const firstDigit = uncertainty.abs().div(new Dec(10).pow(exponent)).floor().toNumber();
+  const u = uncertainty.abs();
+  const firstDigit = Number(u.toExponential(0, Dec.ROUND_DOWN).charAt(0));
   const digits = firstDigit <= 2 ? 2 : 1;
-  let place = exponent - (digits - 1); // decimal place (power of ten) of the last kept digit
-  let roundedU = uncertainty.div(new Dec(10).pow(place)).toDecimalPlaces(0, Dec.ROUND_HALF_UP).times(new Dec(10).pow(place));
-  // Rounding can carry into a new digit (e.g. 0.96 → 1.0); keep the place consistent with it.
-  if (roundedU.e > exponent && digits === 1) place = roundedU.e;
-  roundedU = uncertainty.div(new Dec(10).pow(place)).toDecimalPlaces(0, Dec.ROUND_HALF_UP).times(new Dec(10).pow(place));
+  const roundedU = u.toSignificantDigits(digits, Dec.ROUND_HALF_UP);
+  // Decimal place (power of ten) of the last kept digit; a carry (0.96 → 1) moves it with the new digit.
+  const place = roundedU.e - (digits - 1) + (roundedU.e > u.e && digits === 2 ? 1 : 0);
   const decimals = Math.max(0, -place);
-  const roundedV = value.div(new Dec(10).pow(place)).toDecimalPlaces(0, Dec.ROUND_HALF_EVEN).times(new Dec(10).pow(place));
+  const scale = place > 0 ? new Dec(10).pow(place) : null;
+  const roundedV = scale ? value.div(scale).toDecimalPlaces(0, Dec.ROUND_HALF_EVEN).times(scale) : value.toDecimalPlaces(decimals, Dec.ROUND_HALF_EVEN);
+  const roundedUFinal = scale ? u.div(scale).toDecimalPlaces(0, Dec.ROUND_HALF_UP).times(scale) : u.toDecimalPlaces(decimals, Dec.ROUND_HALF_UP);
   const roundedValue = roundedV.toFixed(decimals);
-  const roundedUncertainty = roundedU.toFixed(decimals);
+  const roundedUncertainty = roundedUFinal.toFixed(decimals);
   return {
     value: value.toString(),
     uncertainty: uncertainty.toString(),
