@@ -100,6 +100,7 @@ describe('lattice sign convention', () => {
 });
 
 describe('cycle builder', () => {
+  // Inputs only (the checks below are structural): CRC ΔfH and atom values as in outside-checks.test.ts.
   const lookup = lookupFromTable({
     'CaCl2|cr|enthalpy_of_formation': { value: '-795.4', source: 'test table' },
     'Ca|g|enthalpy_of_formation': { value: '177.8', source: 'test table' },
@@ -151,6 +152,8 @@ describe('cycle builder', () => {
       values: { 'lattice_enthalpy:CaCl2': { value: '2253.85' } },
     });
     const solved = solveBornHaberCycle(cycle);
+    // Round trip: the lattice value above came from EG1(Cl) = −348.575 kJ/mol (LibreTexts 'A7: Electron
+    // Affinities', https://chem.libretexts.org/Reference/Reference_Tables/Atomic_and_Molecular_Properties/A7%3A_Electron_Affinities)
     expect(new Dec(solved.solvedFor.result.value).toNumber()).toBeCloseTo(-348.575, 6);
   });
 

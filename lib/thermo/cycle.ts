@@ -166,7 +166,11 @@ function cycleLayout(salt: BinarySalt, basis: EnergyBasis): CycleLayout {
     process: `${M}(standard state) → ${M}(g)`,
     coefficient: a,
     basisCorrection: zero,
-    fallbacks: [{ species: M, phase: 'g', property: 'enthalpy_of_formation' }],
+    fallbacks: [
+      { species: M, phase: 'g', property: 'enthalpy_of_formation' },
+      { species: M, phase: 'cr', property: 'enthalpy_of_atomization' },
+      { species: M, phase: 'l', property: 'enthalpy_of_atomization' },
+    ],
   });
   for (let k = 1; k <= cation.charge; k += 1) {
     head.push({
@@ -193,7 +197,10 @@ function cycleLayout(salt: BinarySalt, basis: EnergyBasis): CycleLayout {
     process: `${DIATOMIC_GAS.has(X) || X === 'Br' || X === 'I' ? `½ ${X2}` : X}(standard state) → ${X}(g)`,
     coefficient: b,
     basisCorrection: zero,
-    fallbacks: [{ species: X, phase: 'g', property: 'enthalpy_of_formation' }],
+    fallbacks: [
+      { species: X, phase: 'g', property: 'enthalpy_of_formation' },
+      { species: X, phase: 'cr', property: 'enthalpy_of_atomization' },
+    ],
   };
   const dissociationSpec: StepSpec = {
     key: `bond_dissociation_enthalpy:${X2}`,

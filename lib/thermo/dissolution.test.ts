@@ -127,6 +127,7 @@ describe('batch heat', () => {
   });
 
   it('warns before boiling and says when the estimate reaches boiling', () => {
+    // −81.5 kJ/mol: a round figure near the CaCl2 value computed above from CRC data (inputs only)
     const near = computeBatchHeat({ formula: 'CaCl2', enthalpyOfSolution: '-81.5', saltMassKg: 100, waterMassKg: 400, startTemperatureC: 80 });
     expect(Number(near.finalTemperatureC.value)).toBeGreaterThan(90);
     const boil = computeBatchHeat({ formula: 'CaCl2', enthalpyOfSolution: '-81.5', saltMassKg: 300, waterMassKg: 400, startTemperatureC: 60 });

@@ -36,6 +36,7 @@ describe('reaction enthalpy by Hess’s law', () => {
   });
 
   it('scales to a batch by the mass of one named species', () => {
+    // Inputs from the table above; the 0.9 kJ/mol uncertainty and the 56.077 kg batch are arbitrary.
     const r = computeReactionEnthalpy({
       reaction: 'CaO(cr) + 2 HCl(aq) -> CaCl2(aq) + H2O(l)',
       enthalpiesOfFormation: { 'CaO(cr)': { value: '-634.9', uncertainty: '0.9' }, 'HCl(aq)': '-167.2', 'CaCl2(aq)': '-877.2', 'H2O(l)': '-285.8' },

@@ -38,6 +38,7 @@ describe('energy units', () => {
   });
 
   it('kJ/kg goes through the molar mass', () => {
+    // arbitrary value and molar mass; the check is the definition kJ/kg = kJ/mol × 1000 / M
     expect(convertEnergy('787', 'kJ/mol', 'kJ/kg', '58.44').toNumber()).toBeCloseTo((787 * 1000) / 58.44, 8);
   });
 
