@@ -16,6 +16,12 @@ import { type Edition, getEditionInForce, getEditionOrThrow, getEditionValues } 
 
 type UserActor = Extract<Actor, { kind: 'user' }>;
 
+/** Editions are authored and approved by people, never by API tokens. */
+export function requirePerson(actor: Actor): UserActor {
+  if (actor.kind !== 'user') throw new AppError('forbidden', 'Only a signed-in person can do this, not an API token.');
+  return actor;
+}
+
 /** Every workflow step runs in one transaction holding the site row's lock, so steps on one site never interleave. */
 async function inSiteLock<T>(siteId: string, work: (tx: Tx) => Promise<T>): Promise<T> {
   return db().transaction(async (tx) => {
