@@ -136,6 +136,13 @@ export function solveBornHaberCycle(cycle: BornHaberCycle, convention: LatticeCo
       `The second${cycle.salt.anion.symbol === 'N' ? ' and third' : ''} electron-gain enthalpies of ${cycle.salt.anion.symbol} cannot be measured; tabulated values are back-calculated from cycles, so this cycle is partly circular.`,
     );
   }
+  const known = cycle.steps.filter((s) => s.key !== solved.key);
+  const withoutU = known.filter((s) => s.uncertainty === null).map((s) => s.key);
+  if (withoutU.length > 0) {
+    notes.push(
+      `${withoutU.length} of ${known.length} inputs carry no uncertainty (${withoutU.join(', ')}); they are treated as exact, so the stated uncertainty understates the real one.`,
+    );
+  }
   const stepResult = roundWithUncertainty(target.kind === 'lattice_enthalpy' ? latticeToConvention(solvedValue, convention) : solvedValue, solved.uncertainty);
   return {
     engineVersion: ENGINE_VERSION,
