@@ -101,3 +101,13 @@ export const resolveConflictSchema = z.discriminatedUnion('action', [
   z.object({ action: z.literal('resolve_in_force') }),
 ]);
 export type ResolveConflict = z.infer<typeof resolveConflictSchema>;
+
+/** Why a device's protocol header is not accepted (→ 426, the device keeps its queue), or null. */
+export function protocolProblem(header: string | null): string | null {
+  const v = header === null ? NaN : Number(header);
+  if (!Number.isInteger(v) || v < MIN_SYNC_PROTOCOL) {
+    return `This app speaks sync protocol ${header ?? '(none)'}; the server needs ${MIN_SYNC_PROTOCOL} or later. Reload to update the app — your waiting changes are kept.`;
+  }
+  if (v > SYNC_PROTOCOL) return `This app speaks sync protocol ${v}, newer than the server's ${SYNC_PROTOCOL}. Try again after the server is updated; your waiting changes are kept.`;
+  return null;
+}

@@ -1,0 +1,14 @@
+// POST /api/v1/sync/push – accept a batch of device changes
+import { applyPush } from '@/db/access/sync-push';
+import { maybeSendConflictDigest } from '@/db/access/sync-digest';
+import { requireSyncUser } from '@/db/access/sync-guard';
+import { route } from '@/lib/server/route';
+import { pushRequestSchema, SYNC_PROTOCOL, type PushResponse } from '@/lib/sync/protocol';
+
+export const POST = route({ requires: 'sheet.write' }, async ({ req, actor, body }) => {
+  const user = requireSyncUser(req, actor);
+  const request = await body(pushRequestSchema);
+  const outcomes = await applyPush(user, request);
+  await maybeSendConflictDigest(user.siteId);
+  return { protocol: SYNC_PROTOCOL, outcomes } satisfies PushResponse;
+});
