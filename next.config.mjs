@@ -30,7 +30,8 @@ const nextConfig = {
   poweredByHeader: false,
   // `npm test` runs `tsc --noEmit` over the whole project (tests included) before building, so the
   // build does not check types a second time.
-  typescript: { ignoreBuildErrors: true },
+  // Slot builds point at their own tsconfig so Next's edits to `include` stay out of tsconfig.json.
+  typescript: { ignoreBuildErrors: true, tsconfigPath: process.env.NEXT_TSCONFIG_PATH || 'tsconfig.json' },
   typedRoutes: false,
   async headers() {
     return [

@@ -10,6 +10,11 @@ SMTP_PORT=$((2625 + SLOT * 10)); MAILWEB_PORT=$((2680 + SLOT * 10)); S3_PORT=$((
 TEST_DB=rungbook_test; [ "$SLOT" = 0 ] || TEST_DB="rungbook_test_$SLOT"
 FAKES="$DATA/fakes-test"; [ "$SLOT" = 0 ] || FAKES="$DATA/fakes-test-$SLOT"
 export NEXT_DIST_DIR=".next"; [ "$SLOT" = 0 ] || NEXT_DIST_DIR=".next-slot-$SLOT"
+if [ "$SLOT" != 0 ]; then
+  # Next adds its build folder's type paths to the tsconfig it builds with: give it a throwaway one.
+  export NEXT_TSCONFIG_PATH="tsconfig.slot-$SLOT.json"
+  echo '{ "extends": "./tsconfig.json" }' >"$NEXT_TSCONFIG_PATH"
+fi
 started=()
 cleanup() {
   local rc=$?
