@@ -21,11 +21,11 @@ export function AppShell({ user, siteName, children }: AppShellProps) {
     ...(can(user.role, 'site.manage') ? [{ href: '/admin', label: 'Admin' }] : []),
   ];
   return (
-    <div className="min-h-screen md:grid md:grid-cols-[13rem_1fr]">
+    <div className="min-h-screen lg:grid lg:grid-cols-[13rem_1fr]">
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:p-2">
         Skip to content
       </a>
-      <header className="border-b border-rule bg-white md:min-h-screen md:border-b-0 md:border-r">
+      <header className="border-b border-rule bg-white lg:min-h-screen lg:border-b-0 lg:border-r">
         <div className="flex items-center gap-3 px-4 py-3">
           <Link href="/" className="flex min-h-touch items-center gap-2 font-semibold tracking-tight">
             <RungbookMark />
@@ -33,7 +33,7 @@ export function AppShell({ user, siteName, children }: AppShellProps) {
           </Link>
         </div>
         <NavLinks items={items} />
-        <div className="hidden border-t border-rule px-4 py-3 text-sm md:block">
+        <div className="hidden border-t border-rule px-4 py-3 text-sm lg:block">
           <p className="font-medium">{user.displayName}</p>
           <p className="text-ink-soft">
             {user.role} · {siteName}
@@ -41,8 +41,8 @@ export function AppShell({ user, siteName, children }: AppShellProps) {
           <SignOutButton className="btn-quiet mt-2 w-full" />
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-5xl px-4 py-6 md:px-8">
-        <div className="mb-4 flex items-center justify-between text-sm text-ink-soft md:hidden">
+      <main id="main" className="mx-auto w-full min-w-0 max-w-5xl px-4 py-6 md:px-8">
+        <div className="mb-4 flex items-center justify-between text-sm text-ink-soft lg:hidden">
           <span>
             {user.displayName} · {user.role}
           </span>

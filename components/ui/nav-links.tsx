@@ -12,7 +12,7 @@ export function NavLinks({ items }: { items: NavItem[] }) {
   const pathname = usePathname();
   return (
     <nav aria-label="Main" className="overflow-x-auto px-2 pb-2">
-      <ul className="flex gap-1 md:flex-col">
+      <ul className="flex gap-1 lg:flex-col">
         {items.map((item) => {
           const active = item.href === '/' ? pathname === '/' : pathname.startsWith(item.href);
           return (
