@@ -91,3 +91,32 @@ describe('backup and restore', () => {
     }
   }, 120_000);
 });
+
+describe('creating a site from the command line', () => {
+  it('makes the site and an invited first admin, with no demo data, and e-mails the invitation', async () => {
+    const code = `plant-${Date.now().toString(36)}`;
+    const email = `first.admin.${code}@example.test`;
+    const out = await run(tsx[0], [tsx[1], 'lib/ops/create-site.ts', '--code', code, '--name', 'Harbour Salts Plant', '--admin-email', email]);
+    expect(out.stdout).toContain('invitation link: ');
+    const [site] = await query<{ id: string; name: string }>('SELECT id, name FROM sites WHERE code = ?', [code]);
+    expect(site!.name).toBe('Harbour Salts Plant');
+    const people = await query<{ email: string; role: string; status: string }>('SELECT email, role, status FROM users WHERE site_id = ?', [site!.id]);
+    expect(people).toEqual([{ email, role: 'admin', status: 'invited' }]);
+    const areas = await query('SELECT id FROM areas WHERE site_id = ?', [site!.id]);
+    expect(areas).toHaveLength(0);
+    const inbox = await fetch(`${process.env.MAIL_INBOX_URL}/messages?to=${encodeURIComponent(email)}`).then((r) => r.json() as Promise<{ messages: { text: string }[] }>);
+    expect(inbox.messages[0]!.text).toContain('/invitation?token=');
+  }, 60_000);
+
+  it('refuses bad arguments naming the flag, and a code that exists, without changing anything', async () => {
+    const before = await query<{ n: number }>('SELECT COUNT(*) AS n FROM sites');
+    const bad = (await run(tsx[0], [tsx[1], 'lib/ops/create-site.ts', '--code', 'Bad Code', '--name', 'X plant', '--admin-email', 'a@b.test']).catch((e: unknown) => e)) as { code: number; stderr: string };
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain('--code');
+    const taken = (await run(tsx[0], [tsx[1], 'lib/ops/create-site.ts', '--code', 'calder-reach', '--name', 'Again', '--admin-email', `x.${Date.now()}@example.test`]).catch((e: unknown) => e)) as { code: number; stderr: string };
+    expect(taken.code).toBe(2);
+    expect(taken.stderr).toContain('exists already');
+    const after = await query<{ n: number }>('SELECT COUNT(*) AS n FROM sites');
+    expect(after[0]!.n).toBe(before[0]!.n);
+  }, 60_000);
+});
