@@ -46,7 +46,7 @@ export function parseChangeCsv(input: string): ParseResult {
     seen.add(h);
   });
   for (const c of REQUIRED_COLUMNS) if (!seen.has(c)) errors.push({ row: 1, column: c, message: `the header has no "${c}" column` });
-  if (errors.some((e) => e.row === 1)) return { ok: false, errors };
+  if (errors.some((e) => e.row === 1)) return { ok: false, errors: dedupe(errors) };
 
   const body = records.slice(1);
   const dataRows = body.filter((r) => !(r.length === 1 && r[0]!.trim() === '')).length;

@@ -41,7 +41,7 @@ export const changeRowSchema = z
   .object({
     action: text(10).pipe(z.enum(['set', 'remove'], { message: 'action must be "set" or "remove"' })),
     species: text(64).pipe(z.string().min(1, 'species is required (a formula such as CaCl2, Cl- or Ca2+)')),
-    phase: text(4).pipe(z.enum(PHASES, { message: `phase must be one of ${PHASES.join(', ')}` })),
+    phase: text(10).pipe(z.enum(PHASES, { message: `phase must be one of ${PHASES.join(', ')}` })),
     charge: text(3).refine((s) => s === '' || /^[+-]?\d$/.test(s), { message: 'charge must be a whole number from -9 to 9' }),
     property: text(40).pipe(z.enum(PROPERTY_CODES as [PropertyCode, ...PropertyCode[]], { message: 'unknown property code (see the template for the list)' })),
     coordination: text(3).refine((s) => s === '' || /^\d{1,2}$/.test(s), { message: 'coordination must be a whole number from 1 to 12' }),

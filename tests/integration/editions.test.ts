@@ -27,7 +27,7 @@ interface ErrorBody {
 
 const HEADER = 'action,species,phase,charge,property,coordination,value,std_uncertainty,unit,structure,hydration_scale,source,from_memory,note';
 const csv = (...rows: string[]) => [HEADER, ...rows].join('\n') + '\n';
-const SRC = 'CRC Handbook of Chemistry and Physics, section 5';
+const SRC = 'CRC Handbook of Chemistry and Physics section 5';
 
 /** A small starting set for a fresh site (values from the starter edition, so they are real). */
 const START_ROWS = [
@@ -38,8 +38,13 @@ const START_ROWS = [
   `set,Cl-,g,-1,hydration_enthalpy,,-367,,kJ/mol,,absolute,,yes,from memory`,
 ];
 
-function importCsv(c: Client, editionId: string, body: string | Uint8Array, mode: 'preview' | 'apply' = 'apply') {
-  return c.request<Record<string, unknown> & ErrorBody>('POST', `/api/v1/editions/${editionId}/import?mode=${mode}`, body as string, { 'content-type': 'text/csv' });
+async function importCsv(c: Client, editionId: string, body: string | Uint8Array, mode: 'preview' | 'apply' = 'apply') {
+  const res = await c.raw(`/api/v1/editions/${editionId}/import?mode=${mode}`, {
+    method: 'POST',
+    headers: { origin: c.origin, 'content-type': 'text/csv' },
+    body: body as BodyInit,
+  });
+  return { status: res.status, body: (await res.json()) as Record<string, unknown> & ErrorBody };
 }
 
 async function valuesOf(c: Client, editionId: string) {
