@@ -1,6 +1,7 @@
 import type { Metadata, Viewport } from 'next';
 import localFont from 'next/font/local';
 import { Providers } from '@/components/providers';
+import { PwaStatus } from '@/components/pwa/pwa-status';
 import './globals.css';
 
 // Inter ships with the app from an npm package; nothing is fetched from a font service.
@@ -17,6 +18,9 @@ export const metadata: Metadata = {
   title: { default: 'Rungbook', template: '%s · Rungbook' },
   description: 'Lattice and solution energetics for ionic-salt plants: cycles, model checks, batch heat, calorimetry.',
   applicationName: 'Rungbook',
+  // iPadOS reads its home-screen icon and title from these, not from the web app manifest.
+  icons: { apple: '/icons/rungbook-apple-touch-180.png' },
+  appleWebApp: { capable: true, title: 'Rungbook', statusBarStyle: 'default' },
 };
 
 export const viewport: Viewport = { themeColor: '#1d554d', width: 'device-width', initialScale: 1 };
@@ -26,6 +30,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
     <html lang="en" className={body.variable}>
       <body className="min-h-screen font-sans">
         <Providers>{children}</Providers>
+        <PwaStatus />
       </body>
     </html>
   );

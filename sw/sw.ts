@@ -1,17 +1,132 @@
 /// <reference lib="webworker" />
-// Rungbook's service worker. Built by lib/ops/build-sw.ts (esbuild, then Workbox injectManifest).
-import { precacheAndRoute, cleanupOutdatedCaches } from 'workbox-precaching';
-import { registerRoute } from 'workbox-routing';
-import { CacheFirst } from 'workbox-strategies';
+// Rungbook's service worker. Built by lib/ops/build-sw.ts (esbuild, then Workbox injectManifest);
+// the policy is written up in sw/README.md.
+import { clientsClaim } from 'workbox-core';
+import { cleanupOutdatedCaches, matchPrecache, precacheAndRoute } from 'workbox-precaching';
+import { registerRoute, setCatchHandler } from 'workbox-routing';
+import { NetworkFirst, NetworkOnly } from 'workbox-strategies';
+import type { WorkboxPlugin } from 'workbox-core/types';
+import { OFFLINE_URL, WARM_ROUTES, isOfflinePath, isRscRequest, pageCacheKey, type PageToWorker, type WorkerToPage } from './protocol';
 
 declare const self: ServiceWorkerGlobalScope & { __WB_MANIFEST: { url: string; revision: string | null }[] };
+// The Next.js build id, set by lib/ops/build-sw.ts.
+declare const __RUNGBOOK_BUILD__: string;
 
+const BUILD = __RUNGBOOK_BUILD__;
+// Stored pages name this build's script and style files, so they live and die with the build.
+const PAGES_CACHE = `rungbook-pages-${BUILD}`;
+const OWNER_KEY = '/__rungbook/pages-owner';
+const WARMED_AT_KEY = '/__rungbook/warmed-at';
+const REWARM_AFTER_MS = 10 * 60 * 1000;
+
+// A new version waits until the user chooses to reload (SKIP_WAITING); the first install takes
+// control of open pages at once, so they work offline without a second visit.
+clientsClaim();
 cleanupOutdatedCaches();
-// Hashed build assets (scripts, styles, fonts) only; never RSC payloads.
-precacheAndRoute(self.__WB_MANIFEST);
-registerRoute(({ url }) => url.pathname.startsWith('/_next/static/media/'), new CacheFirst({ cacheName: 'rungbook-fonts' }));
+self.addEventListener('activate', (event) => {
+  event.waitUntil(
+    caches.keys().then((names) => Promise.all(names.filter((n) => n.startsWith('rungbook-pages-') && n !== PAGES_CACHE).map((n) => caches.delete(n)))),
+  );
+});
 
-// The page announces a new version; the user decides when to reload.
+// 1. RSC payloads: network only, before any cache is consulted.
+registerRoute(({ request, url }) => isRscRequest(request.headers, url), new NetworkOnly());
+
+// 2. Sign-out: let it through untouched, then forget the signed-in pages of this device.
+registerRoute(
+  ({ url }) => url.pathname === '/api/auth/signout',
+  async ({ request }) => {
+    const response = await fetch(request);
+    if (response.ok || response.type === 'opaqueredirect') await caches.delete(PAGES_CACHE);
+    return response;
+  },
+  'POST',
+);
+
+// 3. The app shell: hashed scripts, styles and fonts of this build, the offline page, manifest, icons.
+precacheAndRoute(self.__WB_MANIFEST);
+
+// 4. Floor screens: network first; a good HTML answer is stored; offline, the stored copy, else the
+// offline page. A redirect (e.g. to sign-in) or an error page is never stored.
+const storeOnlyHtmlPages: WorkboxPlugin = {
+  cacheKeyWillBeUsed: async ({ request }) => pageCacheKey(new URL(request.url)),
+  cacheWillUpdate: async ({ response }) => (isStorablePage(response) ? response : null),
+  handlerDidError: async ({ request }) => (await storedPage(new URL(request.url))) ?? (await offlinePage()),
+};
+const floorPages = new NetworkFirst({ cacheName: PAGES_CACHE, networkTimeoutSeconds: 6, plugins: [storeOnlyHtmlPages] });
+registerRoute(({ request, url }) => request.mode === 'navigate' && url.origin === self.location.origin && isOfflinePath(url.pathname), floorPages);
+
+// 5. Every other navigation (sign-in, reconcile, admin, …): network only, offline page when offline.
+registerRoute(({ request }) => request.mode === 'navigate', new NetworkOnly());
+
+setCatchHandler(async ({ request }) => (request.mode === 'navigate' ? offlinePage() : Response.error()));
+
+function isStorablePage(response: Response): boolean {
+  return response.status === 200 && response.type === 'basic' && !response.redirected && (response.headers.get('content-type') ?? '').includes('text/html');
+}
+
+async function offlinePage(): Promise<Response> {
+  return (await matchPrecache(OFFLINE_URL)) ?? Response.error();
+}
+
+/** A stored copy of the page, else of the same path without its query (e.g. `/sheets?tab=x`). */
+async function storedPage(url: URL): Promise<Response | undefined> {
+  const cache = await caches.open(PAGES_CACHE);
+  return (await cache.match(pageCacheKey(url))) ?? (await cache.match(url.pathname));
+}
+
+async function readText(cache: Cache, key: string): Promise<string | null> {
+  const r = await cache.match(key);
+  return r ? r.text() : null;
+}
+
+/** Fetch the offline routes with the user's cookies and store the good answers. */
+async function warmRoutes(owner: string, extra: string[], force: boolean): Promise<WorkerToPage> {
+  let cache = await caches.open(PAGES_CACHE);
+  if ((await readText(cache, OWNER_KEY)) !== owner) {
+    await caches.delete(PAGES_CACHE);
+    cache = await caches.open(PAGES_CACHE);
+    await cache.put(OWNER_KEY, new Response(owner));
+  } else if (!force && Date.now() - Number((await readText(cache, WARMED_AT_KEY)) ?? 0) < REWARM_AFTER_MS) {
+    return { type: 'WARMED', owner, cached: [], failed: [], skipped: true };
+  }
+  const urls = new Set<string>(WARM_ROUTES);
+  for (const u of extra) {
+    const url = new URL(u, self.location.origin);
+    if (url.origin === self.location.origin && isOfflinePath(url.pathname)) urls.add(url.pathname + url.search);
+  }
+  const cached: string[] = [];
+  const failed: string[] = [];
+  // One at a time: each is a server render, and the plant network may be thin.
+  for (const path of urls) {
+    try {
+      const response = await fetch(path, { credentials: 'same-origin', redirect: 'manual', cache: 'no-store', headers: { Accept: 'text/html' } });
+      if (!isStorablePage(response)) throw new Error(String(response.status));
+      await cache.put(pageCacheKey(new URL(path, self.location.origin)), response);
+      cached.push(path);
+    } catch {
+      failed.push(path);
+    }
+  }
+  await cache.put(WARMED_AT_KEY, new Response(String(Date.now())));
+  return { type: 'WARMED', owner, cached, failed, skipped: false };
+}
+
 self.addEventListener('message', (event) => {
-  if ((event.data as { type?: string } | null)?.type === 'SKIP_WAITING') void self.skipWaiting();
+  const data = event.data as PageToWorker | null;
+  const reply = (message: WorkerToPage) => (event.ports[0] ? event.ports[0].postMessage(message) : event.source?.postMessage(message));
+  switch (data?.type) {
+    case 'SKIP_WAITING':
+      void self.skipWaiting();
+      break;
+    case 'WARM_ROUTES':
+      if (typeof data.owner === 'string' && data.owner) event.waitUntil(warmRoutes(data.owner, Array.isArray(data.urls) ? data.urls : [], data.force === true).then(reply));
+      break;
+    case 'FORGET_PAGES':
+      event.waitUntil(caches.delete(PAGES_CACHE).then(() => reply({ type: 'PAGES_FORGOTTEN' })));
+      break;
+    case 'GET_VERSION':
+      reply({ type: 'VERSION', build: BUILD });
+      break;
+  }
 });

@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import { can } from '@/lib/auth/permissions';
 import type { UserActor } from '@/lib/auth/current';
+import { WarmOfflinePages } from '@/components/pwa/warm-offline-pages';
 import { RungbookMark } from './rungbook-mark';
 import { NavLinks, type NavItem } from './nav-links';
 import { SignOutButton } from './sign-out-button';
@@ -50,6 +51,7 @@ export function AppShell({ user, siteName, children }: AppShellProps) {
         </div>
         {children}
       </main>
+      <WarmOfflinePages owner={user.userId} />
     </div>
   );
 }
