@@ -162,3 +162,35 @@ test('the offline page is static, reachable signed out, and has no serious acces
   }
   await context.setOffline(false);
 });
+
+test('a record made offline opens under its stored shell, whatever its id', async ({ page, context, request }) => {
+  // The shells (/sheets/open, /bench/open) are the workbench's pages. Until they exist, a stand-in
+  // with the same contract (read ?id= on the device) lets this test check the worker's side.
+  const standIn = (await request.get('/sheets/open')).status() === 404;
+  if (standIn) {
+    await context.route('**/sheets/open*', (route) =>
+      route.fulfill({
+        status: 200,
+        contentType: 'text/html; charset=utf-8',
+        body: `<!doctype html><html lang="en"><title>Sheet</title><h1 id="t">Sheet</h1>
+<script>document.getElementById('t').textContent = 'Sheet ' + new URLSearchParams(location.search).get('id');</script></html>`,
+      }),
+    );
+  }
+  await signInThroughForm(page, DEMO.technician);
+  await waitForControllingWorker(page);
+  await waitForStoredPages(page, ['/sheets/open']);
+  // One copy for every id: opening records online refreshes the same entry, keyed without the query.
+  await page.goto('/sheets/open?id=0193f0c2-opened-online');
+  expect((await storedPages(page)).filter((p) => p.startsWith('/sheets/open'))).toEqual(['/sheets/open']);
+
+  await context.setOffline(true);
+  for (const id of ['0193f0c2-made-offline-1', '0193f0c2-made-offline-2']) {
+    const res = await page.goto(`/sheets/open?id=${id}`);
+    expect(res?.fromServiceWorker()).toBe(true);
+    expect(new URL(page.url()).searchParams.get('id')).toBe(id);
+    await expect(page.getByRole('heading', { level: 1, name: 'This screen isn’t on this device yet' })).toHaveCount(0);
+    if (standIn) await expect(page.getByRole('heading', { level: 1, name: `Sheet ${id}` })).toBeVisible();
+  }
+  await context.setOffline(false);
+});
