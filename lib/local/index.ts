@@ -50,6 +50,7 @@ export {
   LocalStoreError,
 } from './write-records';
 export { syncNow, startSyncTriggers, type SyncPhase, type SyncProgress } from './sync-engine';
+export { uploadWaitingPhotos, getPhotoUploadProgress, subscribePhotoUploadProgress, UPLOAD_PROBLEMS_KEY, type PhotoUploadProgress, type UploadProblems } from './upload-photos';
 export type { LocalRecord, RejectedChange } from '@/lib/sync/local-state';
 export type { Sheet, SheetKind, SheetStatus } from '@/lib/sheets/sheet-schema';
 export type { BenchEntry, PhotoMeta } from '@/lib/bench/bench-entry-schema';

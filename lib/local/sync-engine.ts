@@ -6,6 +6,7 @@ import { applyOutcome, mergePulled, type QueuedMutation } from '@/lib/sync/local
 import { PROTOCOL_HEADER, SYNC_PROTOCOL, type MutationOutcome, type PullResponse, type PushResponse } from '@/lib/sync/protocol';
 import { deviceIdOf, getActiveIdentity, getActiveStore } from './active-store';
 import { recordKey, type RungbookLocalDb } from './local-db';
+import { uploadWaitingPhotos } from './upload-photos';
 
 export type SyncPhase = 'idle' | 'pushing' | 'pulling' | 'offline' | 'signin_required' | 'upgrade_required' | 'error';
 
@@ -71,6 +72,7 @@ async function runOnce() {
     const locks = typeof navigator !== 'undefined' ? navigator.locks : undefined;
     const work = async () => {
       await pushAll(store, who.userId, who.siteId);
+      await uploadWaitingPhotos(store); // photo bytes follow their accepted records (bench log)
       await pullAll(store);
       await refreshEdition(store);
     };
