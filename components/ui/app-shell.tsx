@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { can } from '@/lib/auth/permissions';
 import type { UserActor } from '@/lib/auth/current';
 import { WarmOfflinePages } from '@/components/pwa/warm-offline-pages';
+import { SyncStatus } from '@/components/sync/sync-status';
 import { RungbookMark } from './rungbook-mark';
 import { NavLinks, type NavItem } from './nav-links';
 import { SignOutButton } from './sign-out-button';
@@ -49,6 +50,7 @@ export function AppShell({ user, siteName, children }: AppShellProps) {
           </span>
           <SignOutButton className="btn-quiet" />
         </div>
+        <SyncStatus identity={{ userId: user.userId, siteId: user.siteId, role: user.role, displayName: user.displayName, email: user.email, siteName }} className="mb-4" />
         {children}
       </main>
       <WarmOfflinePages owner={user.userId} />
