@@ -1,13 +1,16 @@
-import { ComingArea } from '@/components/ui/coming-area';
+import { ReferenceBrowser } from '@/components/reference/reference-browser';
 
 export const metadata = { title: 'Reference' };
 
 export default function ReferencePage() {
   return (
-    <ComingArea
-      title="Reference"
-      purpose="The reference edition in force: enthalpies of formation, ionization energies, electron-gain enthalpies, hydration enthalpies, radii and more, each with its source."
-      status="Browsing, drafting, CSV import and approval of editions arrive with the reference-edition release."
-    />
+    <section aria-labelledby="reference-title" className="space-y-4">
+      <h1 id="reference-title">Reference</h1>
+      <p className="max-w-prose text-ink-soft">
+        The approved reference values every sheet on this site is solved with. Each value names its source; values marked
+        “from memory” were not checked against a printed table.
+      </p>
+      <ReferenceBrowser />
+    </section>
   );
 }

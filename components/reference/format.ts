@@ -1,0 +1,69 @@
+// Display helpers shared by the reference and edition screens. Pure module.
+import { PROPERTIES, type PropertyCode, type ReferenceValue } from '@/lib/reference/properties';
+
+export type EditionState = 'draft' | 'in_review' | 'in_force' | 'retired';
+
+export interface EditionInfo {
+  id: string;
+  number: number;
+  state: EditionState;
+  baseEditionId: string | null;
+  changeSummary: string;
+  authorUserId: string;
+  approverUserId: string | null;
+  rejectedByUserId: string | null;
+  rejectionReason: string | null;
+  createdAt: string;
+  updatedAt: string;
+  submittedAt: string | null;
+  inForceAt: string | null;
+  retiredAt: string | null;
+  revision: number;
+  valueCount: number;
+  etag: string;
+}
+
+export const STATE_LABEL: Record<EditionState, string> = {
+  draft: 'Draft',
+  in_review: 'In review',
+  in_force: 'In force',
+  retired: 'Retired',
+};
+
+export function propertyLabel(code: string): string {
+  return PROPERTIES[code as PropertyCode]?.label ?? code;
+}
+
+/** "Ca2+ (g)", "CaCl2·6H2O (cr)". */
+export function speciesLabel(v: Pick<ReferenceValue, 'species' | 'phase'>): string {
+  return `${v.species} (${v.phase})`;
+}
+
+/** Qualifiers that belong with a value: coordination, structure, hydration scale. */
+export function qualifiers(v: ReferenceValue): string {
+  return [v.coordination != null ? `CN ${v.coordination}` : '', v.structure ?? '', v.scale ? `${v.scale} scale` : ''].filter(Boolean).join(' · ');
+}
+
+export function formatDate(iso: string | null): string {
+  if (!iso) return '—';
+  return new Date(iso).toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
+}
+
+export function historyHref(v: Pick<ReferenceValue, 'species' | 'phase' | 'property' | 'coordination'>): string {
+  const q = new URLSearchParams({ species: v.species, phase: v.phase, property: v.property });
+  if (v.coordination != null) q.set('coordination', String(v.coordination));
+  return `/reference/history?${q.toString()}`;
+}
+
+/** GET JSON from our API; throws the server's own message on failure. */
+export async function getJson<T>(url: string): Promise<T> {
+  let res: Response;
+  try {
+    res = await fetch(url, { headers: { accept: 'application/json' } });
+  } catch {
+    throw new Error('No connection to the server. Check the network and try again.');
+  }
+  const data = await res.json().catch(() => null);
+  if (!res.ok) throw new Error(data?.error?.message ?? `The server answered ${res.status}.`);
+  return data as T;
+}
