@@ -18,6 +18,8 @@ const PAGES_CACHE = `rungbook-pages-${BUILD}`;
 const OWNER_KEY = '/__rungbook/pages-owner';
 const WARMED_AT_KEY = '/__rungbook/warmed-at';
 const REWARM_AFTER_MS = 10 * 60 * 1000;
+// Server-rendered record pages are stored as they are visited; keep the most recent ones.
+const MAX_STORED_PAGES = 150;
 
 // A new version waits until the user chooses to reload (SKIP_WAITING); the first install takes
 // control of open pages at once, so they work offline without a second visit.
@@ -32,13 +34,13 @@ self.addEventListener('activate', (event) => {
 // 1. RSC payloads: network only, before any cache is consulted.
 registerRoute(({ request, url }) => isRscRequest(request.headers, url), new NetworkOnly());
 
-// 2. Sign-out: let it through untouched, then forget the signed-in pages of this device.
+// 2. Sign-out: forget the signed-in pages of this device first (even if the server cannot be
+// reached: the user asked to leave), then pass the request through untouched.
 registerRoute(
   ({ url }) => url.pathname === '/api/auth/signout',
   async ({ request }) => {
-    const response = await fetch(request);
-    if (response.ok || response.type === 'opaqueredirect') await caches.delete(PAGES_CACHE);
-    return response;
+    await caches.delete(PAGES_CACHE);
+    return fetch(request);
   },
   'POST',
 );
@@ -51,6 +53,7 @@ precacheAndRoute(self.__WB_MANIFEST);
 const storeOnlyHtmlPages: WorkboxPlugin = {
   cacheKeyWillBeUsed: async ({ request }) => pageCacheKey(new URL(request.url)),
   cacheWillUpdate: async ({ response }) => (isStorablePage(response) ? response : null),
+  cacheDidUpdate: async () => trimStoredPages(),
   handlerDidError: async ({ request }) => (await storedPage(new URL(request.url))) ?? (await offlinePage()),
 };
 const floorPages = new NetworkFirst({ cacheName: PAGES_CACHE, networkTimeoutSeconds: 6, plugins: [storeOnlyHtmlPages] });
@@ -73,6 +76,14 @@ async function offlinePage(): Promise<Response> {
 async function storedPage(url: URL): Promise<Response | undefined> {
   const cache = await caches.open(PAGES_CACHE);
   return (await cache.match(pageCacheKey(url))) ?? (await cache.match(url.pathname));
+}
+
+/** Drops the oldest stored pages (keys come back in insertion order) past the cap; warm routes stay. */
+async function trimStoredPages() {
+  const cache = await caches.open(PAGES_CACHE);
+  const keep = new Set<string>([OWNER_KEY, WARMED_AT_KEY, ...WARM_ROUTES]);
+  const pages = (await cache.keys()).filter((r) => !keep.has(new URL(r.url).pathname + new URL(r.url).search));
+  await Promise.all(pages.slice(0, Math.max(0, pages.length - MAX_STORED_PAGES)).map((r) => cache.delete(r)));
 }
 
 async function readText(cache: Cache, key: string): Promise<string | null> {

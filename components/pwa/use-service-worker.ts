@@ -8,6 +8,8 @@ import { SW_URL } from '@/sw/protocol';
 export type UpdateState = 'none' | 'waiting' | 'elsewhere';
 
 const CHECK_EVERY_MS = 30 * 60 * 1000;
+const MIN_GAP_MS = 5 * 60 * 1000;
+let lastCheck = 0;
 let workbox: Workbox | null = null;
 let reloadRequested = false;
 
@@ -33,6 +35,7 @@ export function useServiceWorker() {
     const onWaiting = () => setState('waiting');
     if (!workbox) {
       workbox = new Workbox(SW_URL, { scope: '/' });
+      lastCheck = Date.now();
       void workbox.register().catch(() => undefined);
     }
     const wb = workbox;
@@ -41,7 +44,11 @@ export function useServiceWorker() {
     void navigator.serviceWorker.getRegistration().then((r) => (r?.waiting && r.active ? onWaiting() : undefined));
 
     // Tablets stay open for a whole shift: look for a new version now and then, and on reconnect.
-    const check = () => (navigator.onLine && document.visibilityState === 'visible' ? void wb.update().catch(() => undefined) : undefined);
+    const check = () => {
+      if (!navigator.onLine || document.visibilityState !== 'visible' || Date.now() - lastCheck < MIN_GAP_MS) return;
+      lastCheck = Date.now();
+      void wb.update().catch(() => undefined);
+    };
     const timer = window.setInterval(check, CHECK_EVERY_MS);
     window.addEventListener('online', check);
     document.addEventListener('visibilitychange', check);
