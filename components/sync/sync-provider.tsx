@@ -2,6 +2,7 @@
 
 import { useEffect } from 'react';
 import { openLocalStore, type LocalIdentity } from '@/lib/local';
+import { installConsoleApi } from '@/lib/local/console-api';
 import { startSyncTriggers } from '@/lib/local/sync-engine';
 
 export interface SyncProviderProps {
@@ -18,7 +19,9 @@ export function SyncProvider({ identity }: SyncProviderProps) {
     let stop: (() => void) | undefined;
     let cancelled = false;
     void openLocalStore(JSON.parse(key) as LocalIdentity).then(() => {
-      if (!cancelled) stop = startSyncTriggers();
+      if (cancelled) return;
+      installConsoleApi();
+      stop = startSyncTriggers();
     });
     return () => {
       cancelled = true;
