@@ -3,6 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { createServer, request, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import AxeBuilder from '@axe-core/playwright';
 import { expect, type Page } from '@playwright/test';
 import { test, waitForControllingWorker } from './pwa-support';
 
@@ -82,6 +83,8 @@ test('a new version is announced, waits for the user, and the reload keeps data 
 
     await expect(banner(page)).toBeVisible();
     await expect(banner(page)).toContainText('A new version of Rungbook is ready.');
+    const { violations } = await new AxeBuilder({ page }).include('[aria-label="New version"]').analyze();
+    expect(violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => v.id)).toEqual([]);
     const state = () =>
       page.evaluate(async () => {
         const r = await navigator.serviceWorker.getRegistration();

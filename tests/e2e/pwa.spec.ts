@@ -194,3 +194,31 @@ test('a record made offline opens under its stored shell, whatever its id', asyn
   }
   await context.setOffline(false);
 });
+
+test('when another user signs in on the device, the previous user’s stored pages are dropped', async ({ page, context }) => {
+  await signInThroughForm(page, DEMO.technician);
+  await waitForControllingWorker(page);
+  await waitForStoredPages(page, ['/', '/sheets']);
+  // The session ends without a sign-out through the app (expired, cookies cleared); the next user
+  // lands on Today and never opens Sheets online.
+  await context.clearCookies();
+  await signInThroughForm(page, DEMO.qcTechnician);
+  const storedSheets = () =>
+    page.evaluate(async () => {
+      for (const name of await caches.keys()) {
+        if (!name.startsWith('rungbook-pages-')) continue;
+        const stored = await (await caches.open(name)).match('/sheets');
+        return stored ? stored.text() : '';
+      }
+      return '';
+    });
+  await expect.poll(storedSheets, { timeout: 30_000 }).toContain('QC lab technician');
+  expect(await storedSheets()).not.toContain('Dissolver hall technician');
+
+  await context.setOffline(true);
+  await page.goto('/sheets');
+  await expect(page.getByRole('heading', { level: 1, name: 'Sheets' })).toBeVisible();
+  await expect(page.getByText('QC lab technician · technician')).toBeVisible();
+  await expect(page.getByText('Dissolver hall technician')).toHaveCount(0);
+  await context.setOffline(false);
+});
