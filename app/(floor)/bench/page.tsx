@@ -1,13 +1,19 @@
-import { ComingArea } from '@/components/ui/coming-area';
+import { Suspense } from 'react';
+import { BenchLog } from '@/components/bench/bench-log';
+import { BenchStoreGate } from '@/components/bench/bench-site-context';
+import { loadBenchSite } from '@/components/bench/load-bench-site';
 
 export const metadata = { title: 'Bench log' };
 
-export default function BenchPage() {
+// The bench log reads this device's local store (online and offline alike); the server only
+// renders the shell with who is signed in and the site's areas and people.
+export default async function BenchPage() {
+  const site = await loadBenchSite('/bench');
   return (
-    <ComingArea
-      title="Bench log"
-      purpose="Notes and photos recorded at the bench, tied to a lot and optionally to a sheet, with the lot's calorimetry results beside them."
-      status="Capturing entries offline and syncing them arrives with the bench-log release."
-    />
+    <BenchStoreGate {...site}>
+      <Suspense fallback={<p className="text-ink-soft">Reading this device’s bench log…</p>}>
+        <BenchLog />
+      </Suspense>
+    </BenchStoreGate>
   );
 }

@@ -1,0 +1,43 @@
+'use client';
+
+import Link from 'next/link';
+
+export interface NewEntryLinkProps {
+  lot?: string;
+  sheetId?: string;
+  className?: string;
+  children: React.ReactNode;
+  'aria-label'?: string;
+}
+
+export function newEntryQuery(lot?: string, sheetId?: string): string {
+  const q = new URLSearchParams();
+  if (lot) q.set('lot', lot);
+  if (sheetId) q.set('sheet', sheetId);
+  return q.toString();
+}
+
+/**
+ * A link to /bench/new. Offline, the service worker may not hold that page yet, so the same form
+ * opens under the entry shell it always keeps (/bench/open?new=1), which renders it the same way.
+ */
+export function NewEntryLink({ lot, sheetId, className, children, ...rest }: NewEntryLinkProps) {
+  const q = newEntryQuery(lot, sheetId);
+  return (
+    <Link
+      href={q ? `/bench/new?${q}` : '/bench/new'}
+      className={className}
+      prefetch={false}
+      aria-label={rest['aria-label']}
+      onClick={(e) => {
+        if (navigator.onLine) return;
+        e.preventDefault();
+        // A full page load, so the service worker answers from its stored shell (no server payload offline).
+        // eslint-disable-next-line @next/next/no-location-assign-relative-destination
+        window.location.assign(`/bench/open?new=1${q ? `&${q}` : ''}`);
+      }}
+    >
+      {children}
+    </Link>
+  );
+}
