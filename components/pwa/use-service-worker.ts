@@ -22,7 +22,12 @@ export function useServiceWorker() {
   const [state, setState] = useState<UpdateState>('none');
 
   useEffect(() => {
-    if (process.env.NODE_ENV !== 'production' || !('serviceWorker' in navigator)) return;
+    if (!('serviceWorker' in navigator)) return;
+    if (process.env.NODE_ENV !== 'production') {
+      // A worker left by a production run on this origin would serve stale build files to `next dev`.
+      void navigator.serviceWorker.getRegistrations().then((rs) => rs.forEach((r) => void r.unregister()));
+      return;
+    }
     // The first install claims the page; that is not an update and needs no reload.
     let controlled = !!navigator.serviceWorker.controller;
     const onChange = () => {
