@@ -109,16 +109,15 @@ function isTransient(error: unknown) {
 
 async function registerDevice(actor: UserActor, deviceId: string) {
   const now = new Date();
-  const conn = await pool().getConnection();
-  try {
-    await conn.query('INSERT IGNORE INTO sync_devices (id, user_id, site_id, created_at, last_seen_at) VALUES (?, ?, ?, ?, ?)', [deviceId, actor.userId, actor.siteId, now, now]);
-    const [rows] = await conn.query('SELECT user_id FROM sync_devices WHERE id = ?', [deviceId]);
-    const owner = (rows as { user_id: string }[])[0]?.user_id;
-    if (owner !== actor.userId) throw new AppError('forbidden', "This device belongs to another user's local store; a push naming another user's device is refused.");
-    await conn.query('UPDATE sync_devices SET last_seen_at = ? WHERE id = ?', [now, deviceId]);
-  } finally {
-    conn.release();
+  const owner = async () => ((await pool().query('SELECT user_id, last_seen_at FROM sync_devices WHERE id = ?', [deviceId]))[0] as { user_id: string; last_seen_at: Date }[])[0];
+  let row = await owner();
+  if (!row) {
+    await pool().query('INSERT IGNORE INTO sync_devices (id, user_id, site_id, created_at, last_seen_at) VALUES (?, ?, ?, ?, ?)', [deviceId, actor.userId, actor.siteId, now, now]);
+    row = await owner();
   }
+  if (row?.user_id !== actor.userId) throw new AppError('forbidden', "This device belongs to another user's local store; a push naming another user's device is refused.");
+  // Last seen, to the minute (no write on every push).
+  if (now.getTime() - new Date(row.last_seen_at).getTime() > 60_000) await pool().query('UPDATE sync_devices SET last_seen_at = ? WHERE id = ?', [now, deviceId]);
 }
 
 async function loadAreaIds(siteId: string): Promise<Set<string>> {

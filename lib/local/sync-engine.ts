@@ -19,7 +19,8 @@ export interface SyncProgress {
   message: string | null;
 }
 
-export const PUSH_BATCH = 100;
+/** Mutations per push request (the server takes up to MAX_BATCH); see perf/sync.bench.ts. */
+export const PUSH_BATCH = 500;
 const PULL_PAGE = 500;
 const PERIOD_MS = 60_000;
 
