@@ -54,7 +54,7 @@ export function DiffView({ fromId, toId }: DiffViewProps) {
               <tr key={`a-${d.key}`} className="border-b border-rule/60 align-top">
                 <td className="py-2 pr-3 font-medium">+ added</td>
                 <td className="py-2 pr-3">{what(d.after)}</td>
-                <td className="py-2 pr-3 text-ink-faint">—</td>
+                <td className="py-2 pr-3 text-ink-soft">—</td>
                 <td className="py-2 pr-3 tabular-nums">{num(d.after)}</td>
               </tr>
             ))}
@@ -74,7 +74,7 @@ export function DiffView({ fromId, toId }: DiffViewProps) {
                 <td className="py-2 pr-3 font-medium">− removed</td>
                 <td className="py-2 pr-3">{what(d.before)}</td>
                 <td className="py-2 pr-3 tabular-nums">{num(d.before)}</td>
-                <td className="py-2 pr-3 text-ink-faint">—</td>
+                <td className="py-2 pr-3 text-ink-soft">—</td>
               </tr>
             ))}
           </tbody>

@@ -42,7 +42,7 @@ export function ReferenceTable({ values, caption, historyLinks = true, pageSize 
         header: 'Species',
         cell: (c) => (
           <span className="whitespace-nowrap font-medium">
-            {c.getValue()} <span className="text-ink-faint">({c.row.original.phase})</span>
+            {c.getValue()} <span className="text-ink-soft">({c.row.original.phase})</span>
           </span>
         ),
         filterFn: (row, _col, wanted: string) => row.original.species.toLowerCase().startsWith(wanted.toLowerCase()),
@@ -60,6 +60,7 @@ export function ReferenceTable({ values, caption, historyLinks = true, pageSize 
       col.accessor((v) => Number(v.value), {
         id: 'value',
         header: 'Value',
+        sortDescFirst: false,
         cell: (c) => (
           <span className="whitespace-nowrap tabular-nums">
             {c.row.original.value}

@@ -8,7 +8,7 @@ const STYLE: Record<EditionState, string> = {
   draft: 'border-dashed border-ink-faint text-ink-soft',
   in_review: 'border-brine-500 text-brine-700',
   in_force: 'border-verdigris-500 bg-verdigris-50 text-verdigris-700 font-semibold',
-  retired: 'border-rule text-ink-faint',
+  retired: 'border-rule text-ink-soft',
 };
 
 /** The state as words (never by colour alone). */

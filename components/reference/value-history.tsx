@@ -56,7 +56,7 @@ export function ValueHistory({ species, phase, property, coordination }: ValueHi
                     <td className="py-2 pr-3">
                       <StateBadge state={edition.state} />
                     </td>
-                    <td className="py-2 pr-3 tabular-nums">{value ? show(value) : <span className="text-ink-faint">not in this edition</span>}</td>
+                    <td className="py-2 pr-3 tabular-nums">{value ? show(value) : <span className="text-ink-soft">not in this edition</span>}</td>
                     <td className="py-2 pr-3 text-xs text-ink-soft">
                       {value?.fromMemory ? <strong className="mr-1 text-ember-700">from memory</strong> : null}
                       {value?.source || value?.note || ''}

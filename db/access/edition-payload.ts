@@ -11,7 +11,7 @@ const cache = new Map<string, Buffer>();
 
 export async function editionBody(edition: Edition, extra: Record<string, unknown> = {}): Promise<Buffer> {
   const cacheable = edition.state !== 'draft' && Object.keys(extra).length === 0;
-  const key = `${edition.id}:${edition.revision}:${edition.state}`;
+  const key = edition.etag;
   const hit = cacheable ? cache.get(key) : undefined;
   if (hit) return hit;
   const values = await getEditionValues(edition.id);

@@ -28,12 +28,13 @@ export interface Edition {
   revision: number;
   valueCount: number;
   contentHash: string | null;
-  /** Strong validator of the edition's values: changes whenever a value changes. */
+  /** Strong validator of the edition's body: changes whenever a value or the edition itself changes. */
   etag: string;
 }
 
-export function editionEtag(row: Pick<EditionRow, 'id' | 'revision'>): string {
-  return `"ed-${row.id}-r${row.revision}"`;
+export function editionEtag(row: Pick<EditionRow, 'id' | 'revision' | 'updatedAt'>): string {
+  // Every step sets updatedAt (state, summary, rejection); every value change bumps the revision.
+  return `"ed-${row.id}-r${row.revision}-${row.updatedAt.getTime().toString(36)}"`;
 }
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
