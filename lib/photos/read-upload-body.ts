@@ -8,7 +8,10 @@ import { formatBytes } from './photo-limits';
  */
 export async function readUploadBody(req: Request, limit: number): Promise<Buffer> {
   const tooLarge = (size?: number) =>
-    new AppError('payload_too_large', `The photo is ${size ? formatBytes(size) : 'too large'}; the most a photo may be is ${formatBytes(limit)}.`, { fields: [{ field: 'photo', message: `At most ${formatBytes(limit)}` }], limit });
+    new AppError('payload_too_large', `${size ? `This photo is ${size} bytes` : 'This photo is over the limit'}; a photo may be at most ${formatBytes(limit)} (${limit} bytes).`, {
+      fields: [{ field: 'photo', message: `At most ${formatBytes(limit)}` }],
+      limit,
+    });
   const declared = Number(req.headers.get('content-length') ?? NaN);
   if (Number.isFinite(declared) && declared > limit) throw tooLarge(declared);
   if (!req.body) return Buffer.alloc(0);
