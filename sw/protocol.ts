@@ -5,10 +5,11 @@ export const SW_URL = '/sw.js';
 export const OFFLINE_URL = '/offline';
 
 /**
- * Record shells: one page per path serves every record, reading `?id=` on the device (records made
- * offline have no server-rendered page). The worker keeps one copy per path, whatever the query.
+ * Shells: one page per path serves every query, read on the device — the record shells (`?id=`;
+ * records made offline have no server-rendered page) and the new-record forms (`?kind=`, `?lot=`…).
+ * The worker keeps one copy per path, whatever the query.
  */
-export const SHELL_PATHS = ['/sheets/open', '/bench/open'] as const;
+export const SHELL_PATHS = ['/sheets/open', '/bench/open', '/sheets/new', '/bench/new'] as const;
 
 /** Fetched into the page cache after sign-in, so these open offline without a prior visit. */
 export const WARM_ROUTES = ['/', '/sheets', '/reference', '/bench', ...SHELL_PATHS] as const;

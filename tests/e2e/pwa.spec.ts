@@ -1,6 +1,7 @@
 // The installable app and its offline shell, in Debian's chromium against the production build.
 import AxeBuilder from '@axe-core/playwright';
 import { expect } from '@playwright/test';
+import { SHELL_PATHS } from '../../sw/protocol';
 import { DEMO } from '../support/http';
 import { OFFLINE_ROUTES, test, fetchOutcome, pngSize, signInThroughForm, storedPages, waitForControllingWorker, waitForStoredPages } from './pwa-support';
 
@@ -164,36 +165,40 @@ test('the offline page is static, reachable signed out, and has no serious acces
 });
 
 test('a record made offline opens under its stored shell, whatever its id', async ({ page, context, request }) => {
-  // The shells (/sheets/open, /bench/open) are the workbench's pages. Until they exist, a stand-in
-  // with the same contract (read ?id= on the device) lets this test check the worker's side.
-  const standIn = (await request.get('/sheets/open')).status() === 404;
-  if (standIn) {
-    await context.route('**/sheets/open*', (route) =>
-      route.fulfill({
-        status: 200,
-        contentType: 'text/html; charset=utf-8',
-        body: `<!doctype html><html lang="en"><title>Sheet</title><h1 id="t">Sheet</h1>
-<script>document.getElementById('t').textContent = 'Sheet ' + new URLSearchParams(location.search).get('id');</script></html>`,
-      }),
-    );
+  // The shells are the workbench's and bench log's pages. One not built yet (404 here) is replaced
+  // by a stand-in with the same contract (read the query on the device), so the worker's side is
+  // still checked.
+  const standIns: string[] = [];
+  for (const path of SHELL_PATHS) {
+    if ((await request.get(path, { maxRedirects: 0 })).status() !== 404) continue;
+    standIns.push(path);
+    await context.route(`**${path}?*`, (route) => route.fulfill({ status: 200, contentType: 'text/html; charset=utf-8', body: standInShell }));
+    await context.route(`**${path}`, (route) => route.fulfill({ status: 200, contentType: 'text/html; charset=utf-8', body: standInShell }));
   }
   await signInThroughForm(page, DEMO.technician);
   await waitForControllingWorker(page);
-  await waitForStoredPages(page, ['/sheets/open']);
+  await waitForStoredPages(page, [...SHELL_PATHS]);
   // One copy for every id: opening records online refreshes the same entry, keyed without the query.
-  await page.goto('/sheets/open?id=0193f0c2-opened-online');
+  await page.goto('/sheets/open?id=0193f0c2-opened-online', { waitUntil: 'load' });
+  await page.waitForTimeout(500); // the worker stores the answer just after handing it over
   expect((await storedPages(page)).filter((p) => p.startsWith('/sheets/open'))).toEqual(['/sheets/open']);
 
   await context.setOffline(true);
-  for (const id of ['0193f0c2-made-offline-1', '0193f0c2-made-offline-2']) {
-    const res = await page.goto(`/sheets/open?id=${id}`);
-    expect(res?.fromServiceWorker()).toBe(true);
-    expect(new URL(page.url()).searchParams.get('id')).toBe(id);
-    await expect(page.getByRole('heading', { level: 1, name: 'This screen isn’t on this device yet' })).toHaveCount(0);
-    if (standIn) await expect(page.getByRole('heading', { level: 1, name: `Sheet ${id}` })).toBeVisible();
+  for (const path of SHELL_PATHS) {
+    for (const id of ['0193f0c2-made-offline-1', '0193f0c2-made-offline-2']) {
+      const url = `${path}?id=${id}`;
+      const res = await page.goto(url);
+      expect(res?.fromServiceWorker(), url).toBe(true);
+      expect(new URL(page.url()).searchParams.get('id')).toBe(id);
+      await expect(page.getByRole('heading', { level: 1, name: 'This screen isn’t on this device yet' }), url).toHaveCount(0);
+      if (standIns.includes(path)) await expect(page.getByRole('heading', { level: 1, name: `Record ${id}` })).toBeVisible();
+    }
   }
   await context.setOffline(false);
 });
+
+const standInShell = `<!doctype html><html lang="en"><title>Record</title><h1 id="t">Record</h1>
+<script>document.getElementById('t').textContent = 'Record ' + new URLSearchParams(location.search).get('id');</script></html>`;
 
 test('when another user signs in on the device, the previous user’s stored pages are dropped', async ({ page, context }) => {
   await signInThroughForm(page, DEMO.technician);
