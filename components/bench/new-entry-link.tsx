@@ -18,8 +18,8 @@ export function newEntryQuery(lot?: string, sheetId?: string): string {
 }
 
 /**
- * A link to /bench/new. Offline, the service worker may not hold that page yet, so the same form
- * opens under the entry shell it always keeps (/bench/open?new=1), which renders it the same way.
+ * A link to /bench/new (a shell the service worker keeps). Offline it loads the whole page, which
+ * the worker answers from its stored copy; the router would otherwise first try the server.
  */
 export function NewEntryLink({ lot, sheetId, className, children, ...rest }: NewEntryLinkProps) {
   const q = newEntryQuery(lot, sheetId);
@@ -33,8 +33,7 @@ export function NewEntryLink({ lot, sheetId, className, children, ...rest }: New
         if (navigator.onLine) return;
         e.preventDefault();
         // A full page load, so the service worker answers from its stored shell (no server payload offline).
-        // eslint-disable-next-line @next/next/no-location-assign-relative-destination
-        window.location.assign(`/bench/open?new=1${q ? `&${q}` : ''}`);
+        window.location.assign(q ? `/bench/new?${q}` : '/bench/new');
       }}
     >
       {children}
