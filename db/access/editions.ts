@@ -70,6 +70,15 @@ export async function getEditionInForce(siteId: string, tx: Db | Tx = db()): Pro
   return row ? (publicEdition(row) as Edition & { state: 'in_force' }) : null;
 }
 
+/** Just the ETag of the edition in force (one narrow indexed read): the 304 path needs nothing more. */
+export async function getEditionInForceEtag(siteId: string): Promise<string | null> {
+  const [row] = await db()
+    .select({ id: editions.id, revision: editions.revision, updatedAt: editions.updatedAt })
+    .from(editions)
+    .where(and(eq(editions.siteId, siteId), eq(editions.state, 'in_force')));
+  return row ? editionEtag(row) : null;
+}
+
 /** An edition of the caller's site (any state — retired editions stay readable), or 404. */
 export async function getEditionOrThrow(siteId: string, editionId: string, tx: Db | Tx = db()): Promise<Edition> {
   const [row] = await tx.select().from(editions).where(and(eq(editions.id, editionId), eq(editions.siteId, siteId)));

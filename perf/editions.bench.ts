@@ -1,0 +1,157 @@
+// Benchmark: GET /api/v1/editions/current with a 5,000-value edition, over real HTTP.
+// Usage: BASE_URL=http://127.0.0.1:3000 DATABASE_URL=mysql://… tsx perf/editions.bench.ts
+// Creates a throwaway site with an edition in force, measures the 200 path (p50/p95 time to last
+// byte on loopback, which bounds the server time from above) and the 304 path, prints the gzipped
+// payload size and the ratio of each figure to its target, then removes the site.
+import http from 'node:http';
+import { performance } from 'node:perf_hooks';
+import { v7 } from 'uuid';
+import { STARTER_EDITION_VALUES } from '../db/seed/starter-edition';
+import { closeDb, makeSite, query } from '../tests/support/db';
+import { Client } from '../tests/support/http';
+
+const BASE_URL = process.env.BASE_URL ?? process.env.PUBLIC_URL ?? 'http://127.0.0.1:3000';
+if (!process.env.DATABASE_URL) throw new Error('set DATABASE_URL (and BASE_URL) to the running app and its database');
+const VALUES = 5000;
+const RUNS_200 = Number(process.env.BENCH_RUNS ?? 200);
+const RUNS_304 = Number(process.env.BENCH_RUNS_304 ?? 500);
+const TARGET_200_P95_MS = 50;
+const TARGET_304_P95_MS = 5;
+
+/** 5,000 values with the starter edition's properties, numbers and citations (so the payload is realistic); species beyond the starter set are synthetic. */
+function syntheticValues() {
+  const out: { species: string; phase: string; charge: number; property: string; value: string; uncertainty: string | null; unit: string; coordination: number | null; structure: string | null; scale: string | null; source: string; fromMemory: boolean; note: string | null }[] = [];
+  for (let copy = 0; out.length < VALUES; copy++) {
+    for (const v of STARTER_EDITION_VALUES) {
+      if (out.length >= VALUES) break;
+      out.push({
+        species: copy === 0 ? v.species : `C${copy}H${2 * copy + 2}·${v.species}`,
+        phase: v.phase,
+        charge: v.charge,
+        property: v.property,
+        value: v.value,
+        uncertainty: v.uncertainty,
+        unit: v.unit,
+        coordination: v.coordination ?? null,
+        structure: v.structure ?? null,
+        scale: v.scale ?? null,
+        source: v.source,
+        fromMemory: v.fromMemory,
+        note: v.note ?? null,
+      });
+    }
+  }
+  return out;
+}
+
+async function seedEdition(siteId: string, authorId: string, approverId: string) {
+  const editionId = v7();
+  const values = syntheticValues();
+  await query(
+    `INSERT INTO editions (id, site_id, number, state, change_summary, author_user_id, approver_user_id, created_at, updated_at, in_force_at, value_count, in_force_slot)
+     VALUES (?, ?, 1, 'in_force', 'benchmark edition (synthetic species)', ?, ?, UTC_TIMESTAMP(3), UTC_TIMESTAMP(3), UTC_TIMESTAMP(3), ?, 1)`,
+    [editionId, siteId, authorId, approverId, values.length],
+  );
+  const species = new Map<string, string>();
+  for (const v of values) species.set(`${v.species}|${v.phase}|${v.charge}`, '');
+  const keys = [...species.keys()];
+  for (let i = 0; i < keys.length; i += 500) {
+    const part = keys.slice(i, i + 500);
+    await query(
+      `INSERT INTO ref_species (id, formula, phase, charge, created_at) VALUES ${part.map(() => '(?, ?, ?, ?, UTC_TIMESTAMP(3))').join(',')} ON DUPLICATE KEY UPDATE formula = formula`,
+      part.flatMap((k) => {
+        const [f, p, c] = k.split('|');
+        return [v7(), f, p, Number(c)];
+      }),
+    );
+  }
+  const rows = await query<{ id: string; formula: string; phase: string; charge: number }>('SELECT id, formula, phase, charge FROM ref_species');
+  for (const r of rows) if (species.has(`${r.formula}|${r.phase}|${r.charge}`)) species.set(`${r.formula}|${r.phase}|${r.charge}`, r.id);
+  for (let i = 0; i < values.length; i += 500) {
+    const part = values.slice(i, i + 500);
+    await query(
+      `INSERT INTO edition_values (id, edition_id, species_id, property, coordination, value_key, value, uncertainty, unit, structure, scale, source, from_memory, note) VALUES ${part.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(',')}`,
+      part.flatMap((v) => [
+        v7(), editionId, species.get(`${v.species}|${v.phase}|${v.charge}`), v.property, v.coordination,
+        `${v.species}|${v.phase}|${v.property}|${v.coordination ?? ''}`, v.value, v.uncertainty, v.unit, v.structure, v.scale, v.source, v.fromMemory, v.note,
+      ]),
+    );
+  }
+  return editionId;
+}
+
+function get(path: string, headers: Record<string, string>): Promise<{ status: number; bytes: number; ms: number; etag: string | undefined }> {
+  return new Promise((resolve, reject) => {
+    const t0 = performance.now();
+    const req = http.get(new URL(path, BASE_URL), { headers, agent: keepAlive }, (res) => {
+      let bytes = 0;
+      res.on('data', (c: Buffer) => (bytes += c.length));
+      res.on('end', () => resolve({ status: res.statusCode ?? 0, bytes, ms: performance.now() - t0, etag: res.headers.etag }));
+      res.on('error', reject);
+    });
+    req.on('error', reject);
+  });
+}
+const keepAlive = new http.Agent({ keepAlive: true, maxSockets: 1 });
+
+function pct(list: number[], p: number) {
+  const s = [...list].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.ceil((p / 100) * s.length) - 1)]!;
+}
+
+const site = await makeSite('bench-editions');
+try {
+  await seedEdition(site.siteId, site.users.technician.id, site.users.supervisor.id);
+  const client = new Client(BASE_URL);
+  const error = await client.signIn(site.users.technician.email, site.password);
+  if (error) throw new Error(`sign-in failed: ${error}`);
+  const cookie = (await client.raw('/api/v1/me')).ok ? cookieOf(client) : '';
+  const base = { cookie, 'accept-encoding': 'gzip' };
+
+  const cold = await get('/api/v1/editions/current', base);
+  if (cold.status !== 200) throw new Error(`GET /api/v1/editions/current answered ${cold.status}`);
+  const etag = cold.etag!;
+  for (let i = 0; i < 10; i++) await get('/api/v1/editions/current', base);
+  const t200: number[] = [];
+  let gz = 0;
+  for (let i = 0; i < RUNS_200; i++) {
+    const r = await get('/api/v1/editions/current', base);
+    if (r.status !== 200) throw new Error(`expected 200, got ${r.status}`);
+    t200.push(r.ms);
+    gz = r.bytes;
+  }
+  const raw = await get('/api/v1/editions/current', { cookie });
+  const t304: number[] = [];
+  for (let i = 0; i < RUNS_304; i++) {
+    const r = await get('/api/v1/editions/current', { ...base, 'if-none-match': etag });
+    if (r.status !== 304) throw new Error(`expected 304, got ${r.status}`);
+    t304.push(r.ms);
+  }
+  const p95_200 = pct(t200, 95);
+  const p95_304 = pct(t304, 95);
+  const f = (n: number) => n.toFixed(2);
+  console.log(`GET /api/v1/editions/current — ${VALUES} values, ${BASE_URL}`);
+  console.log(`  first request (cold body): ${f(cold.ms)} ms`);
+  console.log(`  200 path, ${RUNS_200} runs: p50 ${f(pct(t200, 50))} ms, p95 ${f(p95_200)} ms, max ${f(Math.max(...t200))} ms — target p95 ≤ ${TARGET_200_P95_MS} ms, ratio ${(p95_200 / TARGET_200_P95_MS).toFixed(2)}`);
+  console.log(`  304 path, ${RUNS_304} runs: p50 ${f(pct(t304, 50))} ms, p95 ${f(p95_304)} ms, max ${f(Math.max(...t304))} ms — target p95 ≤ ${TARGET_304_P95_MS} ms, ratio ${(p95_304 / TARGET_304_P95_MS).toFixed(2)}`);
+  console.log(`  payload: ${(gz / 1024).toFixed(1)} KiB gzipped, ${(raw.bytes / 1024).toFixed(1)} KiB uncompressed (${(raw.bytes / gz).toFixed(1)}×)`);
+  console.log('  (times are request-to-last-byte over loopback with keep-alive: an upper bound on server time)');
+} finally {
+  await cleanup(site.siteId);
+  await closeDb();
+  keepAlive.destroy();
+}
+
+function cookieOf(c: Client): string {
+  return (c as unknown as { cookieHeader(): string }).cookieHeader();
+}
+
+async function cleanup(siteId: string) {
+  await query('DELETE v FROM edition_values v JOIN editions e ON e.id = v.edition_id WHERE e.site_id = ?', [siteId]);
+  await query('DELETE FROM edition_value_events WHERE site_id = ?', [siteId]);
+  await query('DELETE FROM editions WHERE site_id = ?', [siteId]);
+  await query("DELETE FROM ref_species WHERE formula LIKE 'C%H%·%' AND id NOT IN (SELECT species_id FROM edition_values)");
+  await query('DELETE FROM audit_log WHERE site_id = ?', [siteId]);
+  await query('DELETE FROM users WHERE site_id = ?', [siteId]);
+  await query('DELETE FROM sites WHERE id = ?', [siteId]);
+}
