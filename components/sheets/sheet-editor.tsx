@@ -169,7 +169,8 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
               {STATUS_TEXT[status]}
             </span>
             Pinned to {pinnedText} · {sheet?.engineVersion ?? ENGINE_VERSION}
-            {record?.pending ? ' · waiting to sync' : record ? ' · synced' : ''}
+            {' · '}
+            <span data-testid="sync-state">{record?.pending ? 'waiting to sync' : record ? 'synced' : 'not saved yet'}</span>
           </p>
           {record?.awaitingReview ? <p className="mt-1 text-sm text-ember-700">A supervisor is settling a conflicting edit of this sheet; you see the server’s version.</p> : null}
           {record?.resultDiffers ? <p className="mt-1 text-sm text-ember-700">The server’s recomputed result differs from this device’s; the server’s is kept on record.</p> : null}
