@@ -109,8 +109,10 @@ async function pushAll(store: RungbookLocalDb, userId: string, siteId: string) {
   if (total === 0) return;
   const tried = new Set<string>();
   let sent = 0;
+  // About ten requests per run so progress moves ("12 of 40 sent"), but never more than PUSH_BATCH.
+  const size = Math.min(PUSH_BATCH, Math.max(10, Math.ceil(total / 10)));
   for (;;) {
-    const batch = (await store.outbox.orderBy('queuedAt').toArray()).filter((m) => !tried.has(m.mutationId)).slice(0, PUSH_BATCH);
+    const batch = (await store.outbox.orderBy('queuedAt').toArray()).filter((m) => !tried.has(m.mutationId)).slice(0, size);
     if (batch.length === 0) break;
     for (const m of batch) tried.add(m.mutationId);
     const mutations = batch.map(({ mutationId, entity, recordId, baseRevision, content }) => ({ mutationId, entity, recordId, baseRevision, content }));
