@@ -48,9 +48,13 @@ function titleOf(entity: Entity, content: unknown): string {
   return 'Photo';
 }
 
-export async function listConflicts(siteId: string, q: ConflictListQuery): Promise<ConflictSummary[]> {
+export async function listConflicts(siteId: string, q: ConflictListQuery & { id?: string }): Promise<ConflictSummary[]> {
   const where = ['c.site_id = ?', 'c.status = ?'];
   const params: unknown[] = [siteId, q.status];
+  if (q.id) {
+    where.push('c.id = ?');
+    params.push(q.id);
+  }
   const add = (clause: string, value: unknown) => {
     where.push(clause);
     params.push(value);
@@ -134,9 +138,7 @@ export async function getConflictOrThrow(siteId: string, conflictId: string): Pr
   };
 }
 
-async function listConflictsById(siteId: string, id: string, status: 'open' | 'resolved') {
-  return (await listConflicts(siteId, { status })).filter((c) => c.id === id);
-}
+const listConflictsById = (siteId: string, id: string, status: 'open' | 'resolved') => listConflicts(siteId, { status, id });
 
 /**
  * Settle a conflict: the chosen content becomes a new revision of the record (awaiting review

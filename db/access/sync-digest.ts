@@ -14,9 +14,9 @@ export const DIGEST_INTERVAL_MS = 15 * 60 * 1000;
  * FOR UPDATE, so two app servers never both send. Mail failure rolls back: the next call retries.
  */
 export async function maybeSendConflictDigest(siteId: string): Promise<boolean> {
-  const [pending] = await pool().query("SELECT 1 FROM sync_conflicts WHERE site_id = ? AND status = 'open' AND notified_at IS NULL LIMIT 1", [siteId]);
-  if ((pending as unknown[]).length === 0) return false;
   try {
+    const [pending] = await pool().query("SELECT 1 FROM sync_conflicts WHERE site_id = ? AND status = 'open' AND notified_at IS NULL LIMIT 1", [siteId]);
+    if ((pending as unknown[]).length === 0) return false;
     return await withSyncTransaction(
       () => pool().getConnection(),
       async (conn) => {

@@ -16,7 +16,7 @@ import { decideMutation } from '@/lib/sync/decide-mutation';
 import { ENTITY_SCHEMAS, type Entity, type Mutation, type MutationOutcome, type PushRequest } from '@/lib/sync/protocol';
 import { detectDrift, EditionContext, solveSheet, type DriftInfo } from './sync-drift';
 import { insertChanges, loadRecords, toServerRecord, upsertRecords, type ChangeRow, type RecordRow } from './sync-records';
-import { SiteSequence, withSyncTransaction } from './sync-sequence';
+import { isTransientDbError, SiteSequence, withSyncTransaction } from './sync-sequence';
 
 type Fields = { field: string; message: string }[];
 type Prepared =
@@ -84,14 +84,14 @@ export async function applyPush(actor: UserActor, req: PushRequest): Promise<Mut
       );
       return result;
     } catch (error) {
+      if (isTransient(error)) {
+        return req.mutations.map((m) => ({ mutationId: m.mutationId, recordId: m.recordId, status: 'retry' as const, reason: 'The server was busy; send again.' }));
+      }
       if (!careful && !(error instanceof AppError) && isDataError(error)) {
         // A write the fast path could not store: run again with a savepoint per mutation.
         log.warn({ err: error }, 'sync push: fast path failed, retrying with a savepoint per mutation');
         careful = true;
         continue;
-      }
-      if (isTransient(error)) {
-        return req.mutations.map((m) => ({ mutationId: m.mutationId, recordId: m.recordId, status: 'retry' as const, reason: 'The server was busy; send again.' }));
       }
       throw error;
     }
@@ -102,10 +102,7 @@ function isDataError(error: unknown) {
   const e = error as { sqlState?: string };
   return typeof e.sqlState === 'string' && (e.sqlState.startsWith('22') || e.sqlState.startsWith('23') || e.sqlState === 'HY000');
 }
-function isTransient(error: unknown) {
-  const e = error as { errno?: number; sqlState?: string };
-  return e.errno === 1213 || e.errno === 1205 || e.sqlState === '40001';
-}
+const isTransient = isTransientDbError;
 
 async function registerDevice(actor: UserActor, deviceId: string) {
   const now = new Date();
