@@ -226,17 +226,18 @@ test('when another user signs in on the device, the previous user’s stored pag
       for (const name of await caches.keys()) {
         if (!name.startsWith('rungbook-pages-')) continue;
         const stored = await (await caches.open(name)).match('/sheets');
-        return stored ? stored.text() : '';
+        // The page's text, as shown: the shell names the signed-in user as "name · role".
+        return stored ? (new DOMParser().parseFromString(await stored.text(), 'text/html').body.textContent ?? '') : '';
       }
       return '';
     });
-  await expect.poll(storedSheets, { timeout: 30_000 }).toContain('QC lab technician');
-  expect(await storedSheets()).not.toContain('Dissolver hall technician');
+  await expect.poll(storedSheets, { timeout: 30_000 }).toContain('QC lab technician · technician');
+  expect(await storedSheets()).not.toContain('Dissolver hall technician · technician');
 
   await context.setOffline(true);
   await page.goto('/sheets');
   await expect(page.getByRole('heading', { level: 1, name: 'Sheets' })).toBeVisible();
   await expect(page.getByText('QC lab technician · technician')).toBeVisible();
-  await expect(page.getByText('Dissolver hall technician')).toHaveCount(0);
+  await expect(page.getByText('Dissolver hall technician · technician')).toHaveCount(0);
   await context.setOffline(false);
 });
