@@ -18,6 +18,7 @@ export function AppShell({ user, siteName, children }: AppShellProps) {
     { href: '/', label: 'Today' },
     { href: '/sheets', label: 'Sheets' },
     { href: '/reference', label: 'Reference' },
+    { href: '/editions', label: 'Editions' },
     { href: '/bench', label: 'Bench log' },
     ...(can(user.role, 'reconcile.resolve') ? [{ href: '/reconcile', label: 'Reconcile' }] : []),
     ...(can(user.role, 'site.manage') ? [{ href: '/admin', label: 'Admin' }] : []),
