@@ -88,7 +88,7 @@ function LotSection({ group, sheetTitles }: { group: LotGroup; sheetTitles: Map<
               New entry
             </NewEntryLink>
             {group.lot !== NO_LOT && (
-              <Link href={newCalorimetryHref(group.lot)} className="btn-quiet" prefetch={false} aria-label={`Start a calorimetry sheet for lot ${group.lot}`}>
+              <Link href={newCalorimetryHref(group.lot)} className="btn-quiet" prefetch={false} aria-label={`Start calorimetry sheet for lot ${group.lot}`}>
                 Start calorimetry sheet
               </Link>
             )}
@@ -111,7 +111,7 @@ function LotSection({ group, sheetTitles }: { group: LotGroup; sheetTitles: Map<
                         {verdict.source === 'device' && <span className="text-ink-soft"> (this device’s result; the server recomputes it on sync)</span>}
                       </p>
                     </div>
-                    <NewEntryLink lot={group.lot || undefined} sheetId={sheet.id} className="btn-quiet" aria-label={`New entry for sheet ${sheet.content.title}`}>
+                    <NewEntryLink lot={group.lot || undefined} sheetId={sheet.id} className="btn-quiet" aria-label={`Add entry for sheet ${sheet.content.title}`}>
                       Add entry
                     </NewEntryLink>
                   </div>
