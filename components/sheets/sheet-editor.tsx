@@ -76,6 +76,12 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
   const pinnedId = sheet && locked ? sheet.pinnedEditionId : (build.editionIds[0] ?? sheet?.pinnedEditionId ?? edition?.id ?? null);
   const pinnedText = pinnedId && edition && pinnedId === edition.id ? editionLabel(edition) : pinnedId ? `edition ${pinnedId.slice(0, 8)} (pinned; not the one in force on this device)` : 'no edition on this device yet';
   const names = useMemo(() => Object.fromEntries(ctx.people.map((p) => [p.id, p.displayName])), [ctx.people]);
+  // Offline the router cannot fetch the next page's payload: load the stored page instead.
+  const go = (url: string, replace = false) => {
+    if (!navigator.onLine) window.location[replace ? 'replace' : 'assign'](url);
+    else if (replace) router.replace(url);
+    else router.push(url);
+  };
 
   function content(from: Sheet): Sheet {
     const request = build.request ?? { kind };
@@ -100,7 +106,7 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
       const saved = await saveSheet(next);
       setMessage({ tone: 'ok', text: `${done} Saved on this device${navigator.onLine ? '; syncing…' : '; it syncs when the device is back online.'}` });
       if (navigator.onLine) void syncNow();
-      if (!sheet) router.replace(`/sheets/open?id=${saved.id}`);
+      if (!sheet) go(`/sheets/open?id=${saved.id}`, true);
       return saved;
     } catch (e) {
       if (e instanceof ZodError) {
@@ -140,7 +146,7 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
     try {
       const next = await startNewSheetVersion(sheet.id);
       if (navigator.onLine) void syncNow();
-      router.push(`/sheets/open?id=${next.id}`);
+      go(`/sheets/open?id=${next.id}`);
     } catch (e) {
       setMessage({ tone: 'error', text: e instanceof Error ? e.message : 'Could not start a new version.' });
     }
@@ -149,7 +155,7 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
     if (!sheet || !window.confirm(`Delete “${sheet.title}”? It is kept as a deleted record and synced.`)) return;
     await deleteSheet(sheet.id);
     if (navigator.onLine) void syncNow();
-    router.push('/sheets');
+    go('/sheets');
   }
   async function onPdf() {
     const s = sheet && locked ? sheet : content(sheet ?? newSheet({ kind, title: meta.title || 'Untitled sheet' }));

@@ -131,10 +131,10 @@ test('an unbalanced reaction is refused naming the element, and the typed reacti
   const page = await signedInPage(browser, DEMO.technician);
   await newSheet(page, 'reaction');
   const reaction = 'CaO(cr) + HCl(aq) -> CaCl2(aq) + H2O(l)';
-  await page.getByLabel('Reaction').fill(reaction);
+  await page.getByLabel('Reaction', { exact: true }).fill(reaction);
   await expect(page.getByRole('alert').filter({ hasText: 'does not balance' })).toContainText(/^(Cl|H) does not balance/);
-  await expect(page.getByLabel('Reaction')).toHaveValue(reaction);
-  await page.getByLabel('Reaction').fill('CaO(cr) + 2 HCl(aq) -> CaCl2(aq) + H2O(l)');
+  await expect(page.getByLabel('Reaction', { exact: true })).toHaveValue(reaction);
+  await page.getByLabel('Reaction', { exact: true }).fill('CaO(cr) + 2 HCl(aq) -> CaCl2(aq) + H2O(l)');
   await expect(page.getByTestId('result-value')).toContainText('kJ/mol');
   await page.context().close();
 });
