@@ -8,9 +8,9 @@ import { useEditionInForce } from './reference-source';
 /** The Reference screen: the edition in force, searchable, with each value's source. */
 export function ReferenceBrowser() {
   const q = useEditionInForce();
-  if (q.isPending) return <p role="status">Loading the edition in force…</p>;
-  if (q.isError) return <p role="alert" className="field-error">{(q.error as Error).message}</p>;
-  if (!q.data) {
+  if (q.status === 'loading') return <p role="status">Loading the edition in force…</p>;
+  if (q.status === 'error') return <p role="alert" className="field-error">{q.message}</p>;
+  if (q.status === 'none') {
     return (
       <p className="panel">
         No reference edition is in force on this site yet. <Link href="/editions" className="underline">Start a draft</Link>.
@@ -26,6 +26,9 @@ export function ReferenceBrowser() {
           <p className="text-xl font-semibold">No. {edition.number}</p>
           <p className="text-sm text-ink-soft">
             In force since {formatDate(edition.inForceAt)} · {edition.valueCount} values
+          </p>
+          <p className="text-xs text-ink-soft">
+            {q.from === 'device' ? `This device’s copy, downloaded ${formatDate(q.fetchedAt)}; it works offline.` : 'Read from the server; this device keeps its own copy at its next sync.'}
           </p>
         </div>
         <div className="flex flex-wrap gap-2">

@@ -3,6 +3,7 @@ import { expect, type Page, test } from '@playwright/test';
 import { STARTER_EDITION_VALUES } from '../../db/seed/starter-edition';
 import { closeDb, makeSite } from '../support/db';
 import { DEMO, DEMO_PASSWORD } from '../support/http';
+import { test as pwaTest, waitForControllingWorker, waitForStoredPages } from './pwa-support';
 
 const HEADER = 'action,species,phase,charge,property,coordination,value,std_uncertainty,unit,structure,hydration_scale,source,from_memory,note';
 
@@ -115,4 +116,21 @@ test('a draft is made, filled from a CSV (a bad file changes nothing), submitted
   await sp.goto('/reference');
   await expect(sp.getByRole('status').filter({ hasText: 'values' })).toHaveText('3 of 3 values');
   await supervisor.close();
+});
+
+pwaTest('the Reference screen reads the device’s copy of the edition in force, so it works offline', async ({ page, context }) => {
+  await signIn(page, DEMO.qcTechnician);
+  await page.goto('/reference');
+  await expect(page.getByText(/This device’s copy, downloaded/)).toBeVisible({ timeout: 20_000 });
+  await waitForControllingWorker(page);
+  await page.reload();
+  await waitForStoredPages(page, ['/reference']);
+  await context.setOffline(true);
+  await page.reload();
+  await expect(page.getByRole('heading', { level: 1, name: 'Reference' })).toBeVisible();
+  await expect(page.getByText(/This device’s copy, downloaded/)).toBeVisible();
+  await expect(page.getByRole('status').filter({ hasText: 'values' })).toHaveText(`${STARTER_EDITION_VALUES.length} of ${STARTER_EDITION_VALUES.length} values`);
+  await page.getByLabel('Search').fill('Cl- hydration');
+  await expect(page.getByRole('status').filter({ hasText: 'values' })).toHaveText(`1 of ${STARTER_EDITION_VALUES.length} values`);
+  await context.setOffline(false);
 });
