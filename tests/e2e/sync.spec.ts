@@ -161,3 +161,62 @@ test('cross-origin and cross-site pushes are refused', async ({ page }) => {
   expect(((await crossSite.json()) as { error: { message: string } }).error.message).toContain('another site');
   expect(await query('SELECT id FROM bench_entries WHERE id = ?', [entry.id])).toHaveLength(0);
 });
+
+test('a change the server refuses is shown with its reason and exported, never dropped silently', async ({ page }) => {
+  await signInThroughForm(page, DEMO.technician);
+  await localApi(page);
+  // A bench entry claiming another author passes the device's schema but is refused by the server.
+  await page.evaluate(async () => {
+    const api = window.rungbook!.local!;
+    await api.saveBenchEntry(api.newBenchEntry({ note: 'claims another author', authorId: 'someone-else' }));
+    await api.syncNow();
+  });
+  await expect(waiting(page)).toHaveText('0 waiting to sync');
+  await page.getByRole('button', { name: '1 not accepted' }).click();
+  await expect(page.getByTestId('sync-rejected')).toContainText('A new record must name its signed-in author.');
+  const remove = page.getByRole('button', { name: 'Remove from this device' });
+  await expect(remove).toBeDisabled();
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Export as a file' }).click()]);
+  const exported = JSON.parse(await (await import('node:fs/promises')).readFile((await download.path())!, 'utf8')) as { rejected: { reason: string; content: { note: string } }[] };
+  expect(exported.rejected[0]).toMatchObject({ reason: 'A new record must name its signed-in author.', content: { note: 'claims another author' } });
+  await expect(remove).toBeEnabled();
+  await remove.click();
+  await expect(page.getByRole('button', { name: '1 not accepted' })).toHaveCount(0);
+});
+
+test('an expired session keeps the queue and asks to sign in; signing out with changes waiting warns and keeps them', async ({ page, context }) => {
+  await signInThroughForm(page, DEMO.qcTechnician);
+  await localApi(page);
+  await context.clearCookies(); // the session ends (as when it expires)
+  const id = await page.evaluate(async () => {
+    const api = window.rungbook!.local!;
+    const e = api.newBenchEntry({ note: 'written after the session ended' });
+    await api.saveBenchEntry(e);
+    await api.syncNow();
+    return e.id;
+  });
+  await expect(page.getByTestId('sync-status')).toContainText('Your session has ended');
+  await expect(waiting(page)).toHaveText('1 waiting to sync');
+  await expect(page.getByTestId('sync-status').getByRole('link', { name: 'Sign in' })).toBeVisible();
+
+  await signInThroughForm(page, DEMO.qcTechnician);
+  await expect(waiting(page)).toHaveText('0 waiting to sync', { timeout: 20_000 });
+  expect(await query('SELECT revision FROM bench_entries WHERE id = ?', [id])).toEqual([{ revision: 1 }]);
+
+  // Sign out with a change waiting: a warning; dismissing it keeps the user signed in with the change.
+  await context.setOffline(true);
+  await page.evaluate(async () => {
+    const api = window.rungbook!.local!;
+    await api.saveBenchEntry(api.newBenchEntry({ note: 'waiting at sign-out' }));
+  });
+  await expect(waiting(page)).toHaveText('1 waiting to sync');
+  let warned = '';
+  page.once('dialog', (d) => {
+    warned = d.message();
+    void d.dismiss();
+  });
+  await page.getByRole('button', { name: 'Sign out' }).first().click();
+  await expect.poll(() => warned).toContain('1 change on this device is still waiting to sync');
+  await expect(waiting(page)).toHaveText('1 waiting to sync');
+  await context.setOffline(false);
+});
