@@ -3,6 +3,7 @@ import { pool } from '@/db/client';
 import { DEMO_AREAS, DEMO_PASSWORD, DEMO_SITE, DEMO_USERS } from './demo-site';
 import { ensureArea, ensureSite, ensureUser } from './ensure-site';
 import { seedEditions } from './editions';
+import { seedBenchEntries } from './bench';
 
 try {
   const site = await ensureSite(DEMO_SITE.code, DEMO_SITE.name);
@@ -11,6 +12,7 @@ try {
   for (const u of DEMO_USERS) if ((await ensureUser(site.id, { ...u, password: DEMO_PASSWORD })).created) created++;
   console.log(`demo site ${site.created ? 'created' : 'already present'}; ${created} new demo accounts`);
   console.log(`reference editions ${(await seedEditions(site.id)).created ? 'seeded (No. 1 retired, No. 2 in force)' : 'already present: left as they are'}`);
+  console.log(`demo bench entries: ${await seedBenchEntries(site.id)} added`);
 } catch (error) {
   console.error('seeding failed:', error);
   process.exitCode = 1;
