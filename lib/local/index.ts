@@ -23,7 +23,7 @@
 //   savePhoto(meta, blob)       → blob in the `photos` table + append-only metadata record queued
 //   syncNow()                   → push the queue, pull the site's changes, refresh the edition
 export { openLocalStore, closeLocalStore, lastIdentity, getActiveStore, getActiveIdentity } from './active-store';
-export type { LocalIdentity, CachedEdition, PhotoBlob } from './local-db';
+export type { LocalIdentity, CachedEdition, EditionInForceBody, PhotoBlob } from './local-db';
 export {
   useLocalStore,
   useLocalIdentity,

@@ -2,6 +2,7 @@
 // never mixes two people's waiting changes. Client-only: never import from a server module.
 import Dexie, { type Table } from 'dexie';
 import type { BenchEntry, PhotoMeta } from '@/lib/bench/bench-entry-schema';
+import type { ReferenceValue } from '@/lib/reference/properties';
 import type { Sheet } from '@/lib/sheets/sheet-schema';
 import type { Entity } from '@/lib/sync/protocol';
 import type { LocalRecord, QueuedMutation, RejectedChange } from '@/lib/sync/local-state';
@@ -16,13 +17,19 @@ export interface LocalIdentity {
   siteName?: string;
 }
 
-/** The edition in force as last pulled (GET /api/v1/editions/current, with its ETag). */
+/** The body of GET /api/v1/editions/current: the edition's header and all its values. */
+export interface EditionInForceBody {
+  edition: { id: string; number: number; state: string; etag: string; changeSummary: string; inForceAt: string | null; [key: string]: unknown };
+  values: ReferenceValue[];
+}
+
+/** The edition in force as last pulled (GET /api/v1/editions/current, refreshed with If-None-Match). */
 export interface CachedEdition {
   key: 'current';
   etag: string | null;
   fetchedAt: string;
-  /** The endpoint's JSON body as served (edition id, name, values …). */
-  edition: unknown;
+  /** The endpoint's JSON body as served: `edition` (id, number, …) and `values`. */
+  edition: EditionInForceBody;
 }
 
 /** A photo's bytes, kept on the device until uploaded (the bench log uploads them separately). */

@@ -5,7 +5,7 @@
 import { applyOutcome, mergePulled, type QueuedMutation } from '@/lib/sync/local-state';
 import { PROTOCOL_HEADER, SYNC_PROTOCOL, type MutationOutcome, type PullResponse, type PushResponse } from '@/lib/sync/protocol';
 import { deviceIdOf, getActiveIdentity, getActiveStore } from './active-store';
-import { recordKey, type RungbookLocalDb } from './local-db';
+import { recordKey, type CachedEdition, type RungbookLocalDb } from './local-db';
 import { uploadWaitingPhotos } from './upload-photos';
 
 export type SyncPhase = 'idle' | 'pushing' | 'pulling' | 'offline' | 'signin_required' | 'upgrade_required' | 'error';
@@ -184,7 +184,7 @@ async function refreshEdition(store: RungbookLocalDb) {
   if (cached?.etag) headers['if-none-match'] = cached.etag;
   const res = await fetch('/api/v1/editions/current', { headers, credentials: 'same-origin', cache: 'no-store' });
   if (res.status === 304 || !res.ok) return; // 404: no edition in force yet
-  const edition = (await res.json()) as unknown;
+  const edition = (await res.json()) as CachedEdition['edition'];
   await store.edition.put({ key: 'current', etag: res.headers.get('etag'), fetchedAt: new Date().toISOString(), edition });
 }
 
