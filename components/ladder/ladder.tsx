@@ -46,11 +46,12 @@ export const Ladder = memo(function Ladder({ geometry: g, unit, title, described
           Energy levels of the cycle drawn to scale, elements in their standard states at zero. Upward steps absorb energy, downward steps release it. The table of steps gives the same values as text.
         </desc>
         <defs>
-          <marker id="head-up" viewBox="0 0 10 10" refX="5" refY="9" markerWidth="7" markerHeight="7" orient="auto-start-reverse">
-            <path d="M0 10 L5 0 L10 10 Z" fill={UP} />
+          {/* Heads point along the shaft (+x in marker space): filled for up, open for down. */}
+          <marker id="head-up" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="7" markerHeight="7" orient="auto">
+            <path d="M0 0 L10 5 L0 10 Z" fill={UP} />
           </marker>
-          <marker id="head-down" viewBox="0 0 10 10" refX="5" refY="9" markerWidth="8" markerHeight="8" orient="auto-start-reverse">
-            <path d="M1 2 L5 10 L9 2" fill="none" stroke={DOWN} strokeWidth="1.6" />
+          <marker id="head-down" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="8" markerHeight="8" orient="auto">
+            <path d="M1 1 L9 5 L1 9" fill="none" stroke={DOWN} strokeWidth="1.6" />
           </marker>
         </defs>
         {/* zero: the elements in their standard states */}
@@ -68,6 +69,10 @@ export const Ladder = memo(function Ladder({ geometry: g, unit, title, described
           const color = up ? UP : DOWN;
           const f = formatEnergy(a.changeKj, unit, null, { signed: true });
           const mid = (a.yFrom + a.yTo) / 2;
+          // Labels sit right of the arrow, or left of it near the right edge.
+          const leftSide = a.x > g.width - 130;
+          const tx = leftSide ? a.x - 8 : a.x + 6;
+          const anchor = leftSide ? 'end' : 'start';
           return (
             <g key={a.key} data-step={a.key} data-direction={a.direction}>
               {a.unknown ? <rect x={a.x - 7} y={Math.min(a.yFrom, a.yTo) - 2} width={14} height={Math.abs(a.yTo - a.yFrom) + 4} fill="#d5ece7" stroke="#1d554d" strokeDasharray="2 2" rx={3} /> : null}
@@ -81,12 +86,12 @@ export const Ladder = memo(function Ladder({ geometry: g, unit, title, described
                 strokeDasharray={up ? undefined : '5 3'}
                 markerEnd={a.direction === 'flat' ? undefined : `url(#head-${up ? 'up' : 'down'})`}
               />
-              <text x={a.x + 6} y={mid - 2} fontSize={10} fill={color} fontWeight={a.unknown ? 700 : 500}>
+              <text x={tx} y={mid - 2} fontSize={10} fill={color} fontWeight={a.unknown ? 700 : 500} textAnchor={anchor}>
                 {up ? '▲ ' : '▼ '}
                 {a.short}
                 {a.overridden ? ' *' : ''}
               </text>
-              <text x={a.x + 6} y={mid + 10} fontSize={10} fill={color} fontWeight={a.unknown ? 700 : 400}>
+              <text x={tx} y={mid + 10} fontSize={10} fill={color} fontWeight={a.unknown ? 700 : 400} textAnchor={anchor}>
                 {f.value}
                 {a.unknown ? ' (solved)' : ''}
               </text>
@@ -94,8 +99,8 @@ export const Ladder = memo(function Ladder({ geometry: g, unit, title, described
           );
         })}
         <g aria-hidden="true">
-          <line x1={g.width - 20} x2={g.width - 20} y1={g.bottom} y2={g.bottom - g.scaleBarLength} stroke={RUNG} strokeWidth={2} />
-          <text x={g.width - 26} y={g.bottom - g.scaleBarLength / 2} fontSize={9.5} textAnchor="end" fill={RUNG}>
+          <line x1={g.width - 10} x2={g.width - 10} y1={g.bottom} y2={g.bottom - g.scaleBarLength} stroke={RUNG} strokeWidth={2} />
+          <text transform={`translate(${g.width - 16} ${g.bottom - g.scaleBarLength / 2}) rotate(-90)`} fontSize={9.5} textAnchor="middle" fill={RUNG}>
             {energyText(g.scaleBarKj, unit)}
           </text>
         </g>

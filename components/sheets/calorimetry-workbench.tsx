@@ -4,7 +4,7 @@
 import { errorFor } from '@/lib/workbench/field-error';
 import { calorimetryFormSchema, type CalorimetryForm } from '@/lib/workbench/calorimetry-sheet';
 import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
-import { energyText, formatNumber, type DisplayUnit } from '@/lib/workbench/format-energy';
+import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { Field } from './field';
 import { useMarkCommit } from './perf-marks';
 import { useLiveForm } from './use-live-form';
@@ -107,7 +107,7 @@ export function CalorimetryWorkbench({ defaults, onChange, build, unit, suggesti
               {r.bestMatch ? r.bestMatch.text : 'No form matches within the tolerance.'}
             </p>
             <p className="text-sm text-ink-soft">
-              ΔT {r.temperatureChangeK.text} K · heat capacity {formatNumber(r.heatCapacityJPerK, 1)} J/K ({r.heatCapacityBasis}) · heat released {r.heatReleasedJ.text} J · {r.method}
+              ΔT {formatRounded(r.temperatureChangeK, 3)} K · heat capacity {formatNumber(r.heatCapacityJPerK, 1)} J/K ({r.heatCapacityBasis}) · heat released {formatRounded(r.heatReleasedJ, 1)} J · {r.method}
             </p>
             <table className="mt-3 w-full border-collapse text-sm">
               <caption className="sr-only">Measured and predicted enthalpy of solution for each form</caption>

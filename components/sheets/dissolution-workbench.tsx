@@ -3,7 +3,7 @@
 // batch inputs; heat released, final temperature, a warning before boiling; cautions beside them.
 import { errorFor } from '@/lib/workbench/field-error';
 import { dissolutionFormSchema, type DissolutionForm, type SheetBuild } from '@/lib/workbench/dissolution-sheet';
-import { energyText, formatNumber, type DisplayUnit } from '@/lib/workbench/format-energy';
+import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { Cautions } from './cautions';
 import { Field } from './field';
 import { useMarkCommit } from './perf-marks';
@@ -108,17 +108,17 @@ export function DissolutionWorkbench({ defaults, onChange, build, unit, suggesti
               <div>
                 <dt className="text-sm text-ink-soft">{r.batchHeat.exothermic ? 'Heat released to the batch' : 'Heat taken up (the batch cools)'}</dt>
                 <dd className="text-2xl font-semibold tabular-nums">
-                  {r.batchHeat.heatReleasedKj.text} kJ <span className="text-base font-normal text-ink-soft">({formatNumber(r.batchHeat.heatReleasedKwh, 2)} kWh)</span>
+                  {formatRounded(r.batchHeat.heatReleasedKj, 0)} kJ <span className="text-base font-normal text-ink-soft">({formatNumber(r.batchHeat.heatReleasedKwh, 2)} kWh)</span>
                 </dd>
               </div>
               <div>
                 <dt className="text-sm text-ink-soft">Adiabatic temperature change (upper bound)</dt>
-                <dd className="text-xl font-semibold tabular-nums">{r.batchHeat.temperatureChangeK.text} K</dd>
+                <dd className="text-xl font-semibold tabular-nums">{formatRounded(r.batchHeat.temperatureChangeK, 1)} K</dd>
               </div>
               <div>
                 <dt className="text-sm text-ink-soft">Final temperature</dt>
                 <dd className={`text-xl font-semibold tabular-nums ${r.batchHeat.reachesBoiling || r.batchHeat.nearBoiling ? 'text-ember-700' : ''}`} data-testid="final-temperature">
-                  {r.batchHeat.finalTemperatureC.text} °C
+                  {formatRounded(r.batchHeat.finalTemperatureC, 1)} °C
                 </dd>
               </div>
               <div>

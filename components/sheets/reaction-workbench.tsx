@@ -4,7 +4,7 @@
 import { Controller } from 'react-hook-form';
 import { FLUORIDE_CAUTION } from '@/lib/thermo';
 import { errorFor } from '@/lib/workbench/field-error';
-import { energyText, formatNumber, type DisplayUnit } from '@/lib/workbench/format-energy';
+import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { reactionFormSchema, reactionTerms, type ReactionForm } from '@/lib/workbench/reaction-sheet';
 import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { Cautions } from './cautions';
@@ -107,7 +107,7 @@ export function ReactionWorkbench({ defaults, onChange, build, unit, locked }: R
             </table>
             {r.batch ? (
               <p className="mt-3 text-lg font-semibold tabular-nums">
-                Batch ({r.batch.massKg} kg of {r.batch.species}): {r.batch.enthalpyChangeKj.text} kJ — heat released {formatNumber(r.batch.heatReleasedKj, 0)} kJ
+                Batch ({r.batch.massKg} kg of {r.batch.species}): {formatRounded(r.batch.enthalpyChangeKj, 0)} kJ — heat released {formatNumber(r.batch.heatReleasedKj, 0)} kJ
               </p>
             ) : null}
             <ul className="mt-2 list-disc pl-5 text-sm text-ink-soft">

@@ -2,25 +2,24 @@
 // One sheet on screen: the workbench of its kind, its title/lot/area/note, saving through the local
 // store (so it works the same offline), the status steps draft → submitted → signed off, and the PDF.
 import { useRouter } from 'next/navigation';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { ZodError } from 'zod';
 import { deleteSheet, LocalStoreError, newSheet, saveSheet, startNewSheetVersion, syncNow, useEditionInForce, type LocalRecord, type Sheet, type SheetKind } from '@/lib/local';
 import { ENGINE_VERSION } from '@/lib/thermo';
-import { buildCalorimetrySheet } from '@/lib/workbench/calorimetry-sheet';
 import { buildCycleSheet } from '@/lib/workbench/cycle-sheet';
-import { buildDissolutionSheet, type SheetBuild } from '@/lib/workbench/dissolution-sheet';
+import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { editionFromCache, editionLabel, saltSuggestions } from '@/lib/workbench/edition-source';
 import { DISPLAY_UNITS } from '@/lib/workbench/format-energy';
-import { buildReactionSheet } from '@/lib/workbench/reaction-sheet';
 import { KIND_TEXT, mayEdit, mayReturnToDraft, maySignOff, maySubmit, STATUS_TEXT } from '@/lib/workbench/sheet-rules';
 import { makeValueSource } from '@/lib/workbench/value-source';
-import { CalorimetryWorkbench } from './calorimetry-workbench';
 import { CycleWorkbench } from './cycle-workbench';
-import { DissolutionWorkbench } from './dissolution-workbench';
 import { Field } from './field';
 import { exportSheetPdf } from './export-pdf';
-import { ReactionWorkbench } from './reaction-workbench';
 import { formOf, type AnyForm } from './sheet-forms';
+import type * as OtherKindsModule from './other-kinds';
+
+type OtherKinds = typeof OtherKindsModule;
+const EMPTY_BUILD: SheetBuild = { errors: [], request: null, inputs: [], outcome: null, editionIds: [] };
 import { Segmented } from './segmented';
 import { useUnit } from './use-unit';
 import type { WorkbenchContext } from './workbench-context';
@@ -54,19 +53,16 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
   const [metaErrors, setMetaErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
 
+  // Other kinds load their module on demand (see other-kinds.tsx).
+  const [other, setOther] = useState<OtherKinds | null>(null);
+  useEffect(() => {
+    if (kind !== 'cycle') void import('./other-kinds').then((m) => setOther(m));
+  }, [kind]);
   const built = useMemo(() => {
-    switch (form.kind) {
-      case 'cycle':
-        return { kind: 'cycle' as const, b: buildCycleSheet(form.form, values) };
-      case 'dissolution':
-        return { kind: 'dissolution' as const, b: buildDissolutionSheet(form.form, values) };
-      case 'reaction':
-        return { kind: 'reaction' as const, b: buildReactionSheet(form.form, values) };
-      case 'calorimetry':
-        return { kind: 'calorimetry' as const, b: buildCalorimetrySheet(form.form, values) };
-    }
-  }, [form, values]);
-  const build: SheetBuild = built.b;
+    if (form.kind === 'cycle') return { kind: 'cycle' as const, b: buildCycleSheet(form.form, values) };
+    return other ? other.buildOther(form, values) : null;
+  }, [form, values, other]);
+  const build: SheetBuild = built?.b ?? EMPTY_BUILD;
 
   const status = sheet?.status ?? 'draft';
   const base = sheet ?? { status: 'draft' as const, authorId: who.userId };
@@ -124,6 +120,7 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
 
   const reasonMissing = build.errors.filter((e) => e.field.endsWith('.reason'));
   async function onSave() {
+    if (!built) return;
     if (reasonMissing.length > 0) {
       setMessage({ tone: 'error', text: 'Not saved: every override needs its reason (see the step marked above).' });
       return;
@@ -219,12 +216,11 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
 
       {!edition && !sheet ? <p className="rounded-md border border-ember-500 bg-ember-50 p-3 text-sm">This device has no reference edition yet: go online once so it can download the edition in force. Values can still be typed by hand, each with its source.</p> : null}
 
-      {form.kind === 'cycle' && built.kind === 'cycle' ? (
+      {form.kind === 'cycle' && built?.kind === 'cycle' ? (
         <CycleWorkbench form={form.form} onChange={(f) => setForm({ kind: 'cycle', form: f })} build={built.b} unit={unit} suggestions={suggestions} locked={locked} />
       ) : null}
-      {form.kind === 'dissolution' && built.kind === 'dissolution' ? <DissolutionWorkbench defaults={form.form} onChange={(f) => setForm({ kind: 'dissolution', form: f })} build={built.b} unit={unit} suggestions={suggestions} locked={locked} /> : null}
-      {form.kind === 'reaction' && built.kind === 'reaction' ? <ReactionWorkbench defaults={form.form} onChange={(f) => setForm({ kind: 'reaction', form: f })} build={built.b} unit={unit} locked={locked} /> : null}
-      {form.kind === 'calorimetry' && built.kind === 'calorimetry' ? <CalorimetryWorkbench defaults={form.form} onChange={(f) => setForm({ kind: 'calorimetry', form: f })} build={built.b} unit={unit} suggestions={suggestions} locked={locked} /> : null}
+      {form.kind !== 'cycle' && other && built && built.kind !== 'cycle' ? <other.OtherKindPanel form={form} built={built} onChange={setForm} unit={unit} suggestions={suggestions} locked={locked} /> : null}
+      {form.kind !== 'cycle' && !other ? <p className="text-sm text-ink-soft">Opening the workbench…</p> : null}
 
       <section aria-labelledby="sheet-actions" className="panel space-y-3 print:hidden">
         <h2 id="sheet-actions">Save and sign-off</h2>

@@ -86,3 +86,15 @@ export function kjToTyped(kj: string, unit: DisplayUnit): string {
   const v = convertEnergy(kj, 'kJ/mol', unit);
   return unit === 'kJ/mol' ? v.toString() : v.toDecimalPlaces(6).toString();
 }
+
+/**
+ * A rounded engine value (value ± uncertainty) as plain text: with its uncertainty when one was
+ * given (decimals follow it), else `decimals` places — never the engine's "(no uncertainty given)".
+ */
+export function formatRounded(v: { value: string; uncertainty: string | null }, decimals: number): string {
+  if (v.uncertainty !== null && !new Dec(v.uncertainty).isZero()) {
+    const d = Math.min(6, decimalsForUncertainty(new Dec(v.uncertainty)));
+    return `${formatNumber(v.value, d)} ± ${formatNumber(v.uncertainty, d)}`;
+  }
+  return formatNumber(v.value, decimals);
+}

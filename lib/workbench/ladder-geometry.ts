@@ -63,7 +63,7 @@ export function shortLabel(key: string, convention: 'dissociation' | 'formation'
   if (kind === 'enthalpy_of_vaporization') return `ΔvapH(${sub(species)})`;
   if (kind === 'enthalpy_of_sublimation') return `ΔsubH(${sub(species)})`;
   if (kind.startsWith('electron_gain_enthalpy')) return `ΔegH${sub(n ?? '1')}(${species})`;
-  if (kind === 'lattice_enthalpy') return convention === 'dissociation' ? `ΔlatH (dissociation, drawn reversed)` : `ΔlatH (formation)`;
+  if (kind === 'lattice_enthalpy') return convention === 'dissociation' ? 'ΔlatH (dissoc.)' : 'ΔlatH (form.)';
   return key;
 }
 
@@ -117,7 +117,8 @@ export function ladderGeometry(cycle: SolvedCycle, opts: { width?: number; heigh
   const top = 28;
   const bottom = height - 28;
   const left = 210;
-  const right = width - 16;
+  // Room on the right for the scale bar.
+  const right = width - 34;
   const steps = cycle.steps;
   const labels = stateLabels(cycle);
   // Start at the salt (ΔfH below the elements), walk the contributions.

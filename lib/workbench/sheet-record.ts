@@ -2,7 +2,7 @@
 // convention and basis, the model check, notes and the sign-off. Shared by the PDF and tests.
 import type { Sheet } from '@/lib/sheets/sheet-schema';
 import type { SolveResult } from '@/lib/thermo';
-import { energyText, formatNumber, type DisplayUnit } from './format-energy';
+import { energyText, formatNumber, formatRounded, type DisplayUnit } from './format-energy';
 import { KIND_TEXT, STATUS_TEXT } from './sheet-rules';
 
 export interface RecordSection {
@@ -106,8 +106,8 @@ export function sheetRecord(sheet: Sheet, ctx: RecordContext): SheetRecord {
       sections.push({
         heading: 'Batch heat',
         lines: [
-          `Heat released: ${b.heatReleasedKj.text} kJ (${formatNumber(b.heatReleasedKwh, 2)} kWh)`,
-          `Adiabatic temperature change: ${b.temperatureChangeK.text} K; final temperature ${b.finalTemperatureC.text} °C`,
+          `Heat released: ${formatRounded(b.heatReleasedKj, 0)} kJ (${formatNumber(b.heatReleasedKwh, 2)} kWh)`,
+          `Adiabatic temperature change (upper bound): ${formatRounded(b.temperatureChangeK, 1)} K; final temperature ${formatRounded(b.finalTemperatureC, 1)} °C`,
           `Heat capacity assumed: ${b.heatCapacityAssumption}`,
           ...b.warnings.map((w) => `WARNING: ${w}`),
           ...b.cautions.map((c) => `CAUTION: ${c}`),
@@ -121,14 +121,14 @@ export function sheetRecord(sheet: Sheet, ctx: RecordContext): SheetRecord {
       table: { columns: ['Species', 'ΔfH°', 'Source'], rows: x.terms.map((t) => [`${t.side === 'reactant' ? 'reactant' : 'product'} ${t.coefficient} ${t.key}`, energyText(t.enthalpyOfFormation, u, t.uncertainty), t.source ?? '—']) },
     });
     const lines = [`Reaction: ${x.reaction}`, `ΔrH°: ${energyText(x.reactionEnthalpy.value, u, x.reactionEnthalpy.uncertainty)} per mole of reaction as written`, `Basis: ${x.basis}`];
-    if (x.batch) lines.push(`Batch: ${x.batch.massKg} kg of ${x.batch.species}: enthalpy change ${x.batch.enthalpyChangeKj.text} kJ (heat released ${formatNumber(x.batch.heatReleasedKj, 0)} kJ)`);
+    if (x.batch) lines.push(`Batch: ${x.batch.massKg} kg of ${x.batch.species}: enthalpy change ${formatRounded(x.batch.enthalpyChangeKj, 0)} kJ (heat released ${formatNumber(x.batch.heatReleasedKj, 0)} kJ)`);
     sections.push({ heading: 'Result', lines: [...lines, ...x.notes] });
   } else {
     const x = r.result;
     sections.push({ heading: 'Inputs', lines: inputLines(sheet) });
     sections.push({
       heading: 'Result',
-      lines: [`Method: ${x.method}`, `Temperature change: ${x.temperatureChangeK.text} K`, `Heat capacity: ${formatNumber(x.heatCapacityJPerK, 1)} J/K (${x.heatCapacityBasis})`, `Heat released: ${x.heatReleasedJ.text} J`, ...x.notes],
+      lines: [`Method: ${x.method}`, `Temperature change: ${formatRounded(x.temperatureChangeK, 3)} K`, `Heat capacity: ${formatNumber(x.heatCapacityJPerK, 1)} J/K (${x.heatCapacityBasis})`, `Heat released: ${formatRounded(x.heatReleasedJ, 1)} J`, ...x.notes],
       table: { columns: ['Form', 'Measured ΔsolH', 'Predicted', 'Within tolerance'], rows: x.candidates.map((c) => [c.formula, energyText(c.measuredEnthalpyOfSolution.value, u, c.measuredEnthalpyOfSolution.uncertainty), energyText(c.predictedEnthalpyOfSolution, u), c.withinTolerance ? 'yes' : 'no']) },
     });
     sections.push({ heading: 'Verdict', lines: [x.bestMatch ? x.bestMatch.text : 'No form matches.'] });
