@@ -58,6 +58,7 @@ export function EditionDetail({ editionId, userId, canApprove }: EditionDetailPr
   const inForce = list.data?.editions.find((x) => x.state === 'in_force') ?? null;
   const base = list.data?.editions.find((x) => x.id === e.baseEditionId) ?? null;
   const isAuthor = e.authorUserId === userId;
+  const fromMemory = values.filter((v) => v.fromMemory).length;
   const open = e.state === 'draft' || e.state === 'in_review';
   const stale = open && list.data !== undefined && (inForce?.id ?? null) !== e.baseEditionId;
   const mayRebase = stale && inForce !== null && (isAuthor || (e.state === 'in_review' && canApprove));
@@ -89,7 +90,10 @@ export function EditionDetail({ editionId, userId, canApprove }: EditionDetailPr
           </div>
           <div>
             <dt className="inline text-ink-soft">Values: </dt>
-            <dd className="inline tabular-nums">{e.valueCount}</dd>
+            <dd className="inline tabular-nums">
+              {e.valueCount}
+              {fromMemory ? ` (${fromMemory} supplied from memory, without a checked source)` : ''}
+            </dd>
           </div>
           <div>
             <dt className="inline text-ink-soft">In force: </dt>

@@ -54,3 +54,16 @@ export async function noticeInForce(e: Edition, approverName: string, retiredNum
       `New sheets are solved with No. ${e.number}; devices fetch it at their next sync.\n${env().PUBLIC_URL}/editions/${e.id}\n`,
   });
 }
+
+/** The author is told their edition was sent back to draft, with the reason. */
+export async function noticeRejected(e: Edition, rejecterName: string): Promise<void> {
+  const [author] = await db().select({ email: users.email, status: users.status }).from(users).where(eq(users.id, e.authorUserId));
+  if (!author || author.status !== 'active') return;
+  await safeSend({
+    to: author.email,
+    subject: `Reference edition No. ${e.number} was sent back to draft`,
+    text:
+      `${rejecterName} sent reference edition No. ${e.number} back to draft.\n\nReason:\n${e.rejectionReason ?? ''}\n\n` +
+      `Change it and submit it again:\n${env().PUBLIC_URL}/editions/${e.id}\n`,
+  });
+}

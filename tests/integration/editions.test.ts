@@ -256,9 +256,12 @@ describe('the edition workflow, per role', () => {
   it('a supervisor rejects with a reason: back to draft; the author fixes, resubmits, and another supervisor approves', async () => {
     const noReason = await sup.post<ErrorBody>(`/api/v1/editions/${first.id}/reject`, { reason: '' });
     expect(noReason.status).toBe(422);
+    const sentBack = Date.now() - 1000;
     const rejected = await sup.post<{ edition: EditionBody }>(`/api/v1/editions/${first.id}/reject`, { reason: 'Cite the table for the Cl- hydration enthalpy.' });
     expect(rejected.status).toBe(200);
     expect(rejected.body.edition).toMatchObject({ state: 'draft', rejectionReason: 'Cite the table for the Cl- hydration enthalpy.' });
+    const toAuthor = await waitForMail(site.users.technician.email, 'No. 1 was sent back to draft', sentBack);
+    expect(toAuthor.text).toContain('Cite the table for the Cl- hydration enthalpy.');
     // A rejected edition cannot be approved until it is submitted again.
     expect((await sup.post(`/api/v1/editions/${first.id}/approve`)).status).toBe(409);
     expect((await tech.post(`/api/v1/editions/${first.id}/submit`)).status).toBe(200);
