@@ -44,7 +44,8 @@ export function ConflictReview({ conflictId, onSettled }: ConflictReviewProps) {
 
   return (
     <div className="panel mt-2 space-y-4" aria-label={`Review of ${c.title}`}>
-      {c.drift ? <DriftSummary c={c} /> : <EditComparison c={c} choice={choice} setChoice={setChoice} open={open} />}
+      {c.drift ? <DriftSummary c={c} /> : null}
+      {!c.drift || c.versions.length > 0 ? <EditComparison c={c} choice={choice} setChoice={setChoice} open={open} /> : null}
       {settle.isError ? (
         <p role="alert" className="field-error">
           {settle.error.message}
@@ -61,11 +62,14 @@ export function ConflictReview({ conflictId, onSettled }: ConflictReviewProps) {
                 Re-solve with the edition in force
               </button>
             </>
-          ) : (
+          ) : null}
+          {!c.drift || c.versions.length > 0 ? (
             <>
-              <button type="button" className="btn-quiet" disabled={settle.isPending} onClick={() => settle.mutate({ action: 'keep_server' })}>
-                Keep the server&apos;s version
-              </button>
+              {c.drift ? null : (
+                <button type="button" className="btn-quiet" disabled={settle.isPending} onClick={() => settle.mutate({ action: 'keep_server' })}>
+                  Keep the server&apos;s version
+                </button>
+              )}
               {c.versions.map((v, i) => (
                 <button key={v.id} type="button" className="btn-quiet" disabled={settle.isPending} onClick={() => settle.mutate({ action: 'keep_device', versionId: v.id })}>
                   Keep device version {i + 1} ({v.userName})
@@ -80,7 +84,7 @@ export function ConflictReview({ conflictId, onSettled }: ConflictReviewProps) {
                 Merge the chosen fields
               </button>
             </>
-          )}
+          ) : null}
         </div>
       ) : (
         <p className="text-sm text-ink-soft">Settled.</p>

@@ -171,14 +171,15 @@ export async function resolveConflict(actor: UserActor, conflictId: string, choi
           next = server;
           break;
         case 'keep_device': {
-          if (isDrift) throw new AppError('bad_request', 'Edition drift has no device version to keep; keep the pinned edition or re-solve.', { fields: [{ field: 'action', message: 'Not for edition drift' }] });
+          // Drift has device versions only when someone edited the sheet while it awaited review.
+          if (isDrift && Object.keys(versions).length === 0) throw new AppError('bad_request', 'This edition drift has no device version to keep; keep the pinned edition or re-solve.', { fields: [{ field: 'action', message: 'Not for edition drift' }] });
           const v = versions[choice.versionId];
           if (!v) throw new AppError('validation', 'No such device version in this conflict.', { fields: [{ field: 'versionId', message: 'Not a version of this conflict' }] });
           next = { ...v, authorId: server.authorId };
           break;
         }
         case 'merge': {
-          if (isDrift) throw new AppError('bad_request', 'Edition drift is settled by keeping the pinned edition or re-solving.', { fields: [{ field: 'action', message: 'Not for edition drift' }] });
+          if (isDrift && Object.keys(versions).length === 0) throw new AppError('bad_request', 'This edition drift is settled by keeping the pinned edition or re-solving.', { fields: [{ field: 'action', message: 'Not for edition drift' }] });
           const merged = mergeFieldByField(server, versions, choice.fields, MERGE_FIELDS[entity]);
           if (!merged.ok) throw new AppError('validation', `${merged.field}: ${merged.message}`, { fields: [{ field: merged.field, message: merged.message }] });
           next = merged.merged;
