@@ -461,6 +461,12 @@ describe('sheets: server recompute and access rules', () => {
     const conflicts = await list.get<{ conflicts: { id: string; recordId: string; kind: string }[] }>('/api/v1/conflicts?kind=drift');
     const drift = conflicts.body.conflicts.find((c) => c.recordId === s.id)!;
     expect(drift.kind).toBe('drift');
+    // An edit made while the sheet awaits review joins the drift review as a device version.
+    const [late] = await pushOk(w, [mutation('sheet', { ...s, note: 'added while awaiting review' }, 1)]);
+    expect(late).toMatchObject({ status: 'conflict', conflictId: drift.id });
+    const detail = await list.get<{ versions: { content: { note: string } }[]; drift: { inForceEditionId: string } }>(`/api/v1/conflicts/${drift.id}`);
+    expect(detail.body.versions.map((v) => v.content.note)).toEqual(['added while awaiting review']);
+    expect(detail.body.drift.inForceEditionId).toBe(inForce.id);
     const resolved = await list.post<{ record: ServerRecord }>(`/api/v1/conflicts/${drift.id}/resolve`, { action: 'resolve_in_force' });
     expect(resolved.status, JSON.stringify(resolved.body)).toBe(200);
     const content = resolved.body.record.content as { pinnedEditionId: string; problem: { problem: { values: Record<string, { value: string }> } } };
