@@ -47,10 +47,10 @@ export const Ladder = memo(function Ladder({ geometry: g, unit, title, described
         </desc>
         <defs>
           {/* Heads point along the shaft (+x in marker space): filled for up, open for down. */}
-          <marker id="head-up" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="7" markerHeight="7" orient="auto">
+          <marker id="head-up" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="10" markerHeight="10" markerUnits="userSpaceOnUse" orient="auto">
             <path d="M0 0 L10 5 L0 10 Z" fill={UP} />
           </marker>
-          <marker id="head-down" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="8" markerHeight="8" orient="auto">
+          <marker id="head-down" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="11" markerHeight="11" markerUnits="userSpaceOnUse" orient="auto">
             <path d="M1 1 L9 5 L1 9" fill="none" stroke={DOWN} strokeWidth="1.6" />
           </marker>
         </defs>
