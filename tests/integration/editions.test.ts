@@ -445,6 +445,21 @@ describe('CSV import into a draft', () => {
     const big = csv(good.replace('Shannon 1976', 'x'.repeat(1900)), ...Array.from({ length: 1200 }, () => good.replace('Shannon 1976', 'y'.repeat(1900))));
     const r = await importCsv(tech, draft.id, big);
     expect(r.status).toBe(413);
+    // The same bytes sent chunked (no Content-Length) are stopped at the limit too.
+    const bytes = new TextEncoder().encode(big);
+    const stream = new ReadableStream<Uint8Array>({
+      start(controller) {
+        for (let i = 0; i < bytes.length; i += 64 * 1024) controller.enqueue(bytes.slice(i, i + 64 * 1024));
+        controller.close();
+      },
+    });
+    const chunked = await tech.raw(`/api/v1/editions/${draft.id}/import?mode=apply`, {
+      method: 'POST',
+      headers: { origin: tech.origin, 'content-type': 'text/csv' },
+      body: stream,
+      duplex: 'half',
+    } as RequestInit);
+    expect(chunked.status).toBe(413);
   });
 
   it('a preview lists added, changed and removed (old → new) and applies nothing; apply then does', async () => {
