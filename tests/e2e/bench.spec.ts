@@ -196,6 +196,46 @@ test('storage stopped during a sync: the photo waits and retries, then everythin
   }
 });
 
+test('another technician reads an entry but may not change it; a supervisor corrects it', async ({ page, browser }) => {
+  // A demo entry by the dissolver-hall technician (db/seed/bench.ts).
+  await signInThroughForm(page, DEMO.qcTechnician);
+  await page.goto('/bench?lot=CR-LC-2611-04');
+  await page.getByRole('link', { name: /Drum 4 received/ }).click();
+  await expect(page.getByTestId('entry-note')).toContainText('Label reads lithium chloride');
+  await expect(page.getByText('Only its author or a supervisor may change this entry.')).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Edit' })).toHaveCount(0);
+
+  const ctx = await browser.newContext({ viewport: { width: 768, height: 1024 }, hasTouch: true });
+  const sup = await ctx.newPage();
+  await signInThroughForm(sup, DEMO.supervisor);
+  await sup.goto('/bench?lot=CR-LC-2611-04');
+  await sup.getByRole('link', { name: /Drum 4 received/ }).click();
+  await expect(sup).toHaveURL(/\/bench\/open\?id=/);
+  const entryId = new URL(sup.url()).searchParams.get('id')!;
+  await sup.getByRole('button', { name: 'Edit' }).click();
+  await expect(sup.getByText(/You are correcting an entry by Dissolver hall technician/)).toBeVisible();
+  await sup.getByLabel('Note').fill('');
+  await sup.getByLabel('Lot').fill('');
+  await sup.getByRole('button', { name: 'Save changes' }).click();
+  await expect(sup.locator('#bench-lotRef-error')).toHaveText('Give the lot this entry belongs to');
+  await sup.getByLabel('Lot').fill('CR-LC-2611-04');
+  await sup.getByLabel('Note').fill('Drum 4 received. Label reads lithium chloride, anhydrous, 25 kg net. Seal intact. (Corrected: drum 4, not drum 3.)');
+  await sup.getByRole('button', { name: 'Save changes' }).click();
+  await expect(sup.getByText('Saved on this device.')).toBeVisible();
+  const stored = () => query<{ note: string; author_id: string; revision: number }>("SELECT JSON_UNQUOTE(JSON_EXTRACT(content, '$.note')) AS note, author_id, revision FROM bench_entries WHERE id = ?", [entryId]);
+  await expect.poll(async () => (await stored())[0]?.note, { timeout: 20_000 }).toContain('(Corrected: drum 4, not drum 3.)');
+  await expect(waiting(sup)).toHaveText('0 waiting to sync', { timeout: 20_000 });
+  const [row] = await stored();
+  expect(row?.revision).toBeGreaterThanOrEqual(2);
+  const [author] = await query<{ email: string }>('SELECT email FROM users WHERE id = ?', [row!.author_id]);
+  expect(author?.email).toBe(DEMO.technician);
+  await ctx.close();
+
+  // The QC technician's device gets the correction with its next sync.
+  await page.getByRole('button', { name: 'Sync now' }).click();
+  await expect(page.getByTestId('entry-note')).toContainText('(Corrected: drum 4, not drum 3.)', { timeout: 20_000 });
+});
+
 test('the bench log has no serious accessibility problems and works by keyboard', async ({ page }) => {
   await signInThroughForm(page, DEMO.supervisor);
   await page.goto('/bench');
