@@ -110,6 +110,13 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   // The author's device learns of the sign-off and locks the sheet too.
   await tech.reload();
   await expect(tech.getByTestId('sheet-status')).toHaveText('Signed off', { timeout: 30_000 });
+  // A later change starts a new sheet version linked to the signed-off one.
+  const signedUrl = tech.url();
+  await tech.getByRole('button', { name: 'Start a new version' }).click();
+  await expect(tech.getByText('sheet version 2')).toBeVisible();
+  await expect(tech.getByTestId('sheet-status')).toHaveText('Draft');
+  expect(tech.url()).not.toBe(signedUrl);
+  await expect(tech.getByRole('link', { name: 'open the signed-off version' })).toHaveAttribute('href', new URL(signedUrl).pathname + new URL(signedUrl).search);
   await tech.context().close();
   await sup.context().close();
 });
@@ -178,5 +185,35 @@ test('the main screens have no serious or critical accessibility problems', asyn
   await page.getByLabel('Formula of the salt').fill('CH4');
   await expect(page.getByRole('alert').first()).toBeVisible();
   await expect(page.getByLabel('Formula of the salt')).toHaveValue('CH4');
+  await page.context().close();
+});
+
+test('the list duplicates a sheet and deletes the copy (a tombstone); the unit is the user’s choice', async ({ browser }) => {
+  const page = await signedInPage(browser, DEMO.technician);
+  const stamp = Date.now().toString(36);
+  await newSheet(page, 'cycle');
+  await page.getByLabel('Title').fill(`LiCl list check ${stamp}`);
+  await page.getByLabel('Formula of the salt').fill('LiCl');
+  await expect(page.getByTestId('result-value')).toContainText('kJ/mol');
+  await page.getByText('kcal/mol', { exact: true }).click();
+  await expect(page.getByTestId('result-value')).toContainText('kcal/mol');
+  await page.getByText('kJ/mol', { exact: true }).click();
+  await page.getByRole('button', { name: 'Save', exact: true }).click();
+  await expect(page).toHaveURL(/\/sheets\/open\?id=/);
+
+  await page.goto('/sheets');
+  await page.getByRole('searchbox', { name: 'Search' }).fill(stamp);
+  await expect(page.getByRole('link', { name: `LiCl list check ${stamp}`, exact: true })).toBeVisible();
+  await page.getByRole('button', { name: `Duplicate LiCl list check ${stamp}` }).click();
+  await expect(page.getByRole('link', { name: `LiCl list check ${stamp} (copy)` })).toBeVisible();
+  page.once('dialog', (d) => void d.accept());
+  await page.getByRole('button', { name: `Delete LiCl list check ${stamp} (copy)` }).click();
+  await expect(page.getByRole('link', { name: `LiCl list check ${stamp} (copy)` })).toHaveCount(0);
+  await expect(page.getByRole('link', { name: `LiCl list check ${stamp}`, exact: true })).toBeVisible();
+  // Filters: a lattice-cycle filter keeps it, a calorimetry filter hides it.
+  await page.getByLabel('Type').selectOption({ label: 'Calorimetry run' });
+  await expect(page.getByText('No sheet matches the search and filters.')).toBeVisible();
+  await page.getByLabel('Type').selectOption({ label: 'Lattice cycle' });
+  await expect(page.getByRole('link', { name: `LiCl list check ${stamp}`, exact: true })).toBeVisible();
   await page.context().close();
 });
