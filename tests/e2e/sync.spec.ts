@@ -4,7 +4,9 @@
 // (saveSheet / saveBenchEntry) the workbench and bench-log screens use, which are not built yet.
 import AxeBuilder from '@axe-core/playwright';
 import { expect, type BrowserContext, type Page } from '@playwright/test';
-import { DEMO } from '../support/http';
+import { hash } from '@node-rs/argon2';
+import { v7 } from 'uuid';
+import { DEMO_PASSWORD } from '../support/http';
 import { closeDb, makeSite, query } from '../support/db';
 import { signInThroughForm, test, waitForControllingWorker, waitForStoredPages } from './pwa-support';
 
@@ -32,8 +34,24 @@ async function localApi(page: Page) {
 
 const waiting = (page: Page) => page.getByTestId('sync-waiting');
 
+/** A fresh account on the demo site, so these tests do not spend the shared demo accounts' sign-in rate limit. */
+async function demoSiteUser(role: 'technician' | 'supervisor'): Promise<string> {
+  const [demo] = await query<{ id: string }>("SELECT id FROM sites WHERE code = 'calder-reach'");
+  const id = v7();
+  const email = `sync-e2e-${role}-${id.slice(-12)}@calder-reach.test`;
+  await query("INSERT INTO users (id, site_id, email, display_name, role, status, password_hash, created_at) VALUES (?, ?, ?, ?, ?, 'active', ?, UTC_TIMESTAMP(3))", [
+    id,
+    demo!.id,
+    email,
+    `Sync e2e ${role}`,
+    role,
+    await hash(DEMO_PASSWORD),
+  ]);
+  return email;
+}
+
 test('a record made and edited offline survives closing the page and syncs exactly once when back online', async ({ page, context }) => {
-  await signInThroughForm(page, DEMO.technician);
+  await signInThroughForm(page, await demoSiteUser('technician'));
   await waitForControllingWorker(page);
   await page.goto('/bench');
   await waitForStoredPages(page, ['/bench']);
@@ -81,8 +99,9 @@ async function device(browser: import('@playwright/test').Browser, email: string
 }
 
 test('two devices edit one sheet offline → a conflict → a supervisor settles it → both devices converge', async ({ browser }) => {
-  const a = await device(browser, DEMO.qcTechnician);
-  const b = await device(browser, DEMO.qcTechnician); // the same technician's second tablet
+  const technician = await demoSiteUser('technician');
+  const a = await device(browser, technician);
+  const b = await device(browser, technician); // the same technician's second tablet
   const title = `Slaking trial ${Date.now()}`;
   // Formation enthalpies are test inputs for the engine, not check values.
   const id = await a.page.evaluate(async (title) => {
@@ -123,7 +142,7 @@ test('two devices edit one sheet offline → a conflict → a supervisor settles
   expect(onB?.content.title).toBe(`${title} (tablet A)`);
 
   // The supervisor settles it on the reconcile screen, keeping tablet B's version.
-  const sup = await device(browser, DEMO.qcSupervisor);
+  const sup = await device(browser, await demoSiteUser('supervisor'));
   await sup.page.goto('/reconcile');
   await expect(sup.page.getByRole('heading', { level: 1, name: 'Reconcile' })).toBeVisible();
   await sup.page.getByRole('button', { name: new RegExp(`${title} \\(tablet A\\)`) }).click();
@@ -145,7 +164,7 @@ test('two devices edit one sheet offline → a conflict → a supervisor settles
 });
 
 test('cross-origin and cross-site pushes are refused', async ({ page }) => {
-  await signInThroughForm(page, DEMO.technician);
+  await signInThroughForm(page, await demoSiteUser('technician'));
   const me = (await (await page.request.get('/api/v1/me')).json()) as { userId: string; siteId: string };
   const t = new Date().toISOString();
   const entry = { id: '0190f3a0-0000-7000-8000-0000000e2e01', note: 'refused', lotRef: null, areaId: null, tags: [], sheetId: null, photoIds: [], authorId: me.userId, deleted: false, createdAt: t, updatedAt: t };
@@ -163,7 +182,7 @@ test('cross-origin and cross-site pushes are refused', async ({ page }) => {
 });
 
 test('a change the server refuses is shown with its reason and exported, never dropped silently', async ({ page }) => {
-  await signInThroughForm(page, DEMO.technician);
+  await signInThroughForm(page, await demoSiteUser('technician'));
   await localApi(page);
   // A bench entry claiming another author passes the device's schema but is refused by the server.
   await page.evaluate(async () => {
@@ -185,7 +204,8 @@ test('a change the server refuses is shown with its reason and exported, never d
 });
 
 test('an expired session keeps the queue and asks to sign in; signing out with changes waiting warns and keeps them', async ({ page, context }) => {
-  await signInThroughForm(page, DEMO.qcTechnician);
+  const email = await demoSiteUser('technician');
+  await signInThroughForm(page, email);
   await localApi(page);
   await context.clearCookies(); // the session ends (as when it expires)
   const id = await page.evaluate(async () => {
@@ -199,7 +219,7 @@ test('an expired session keeps the queue and asks to sign in; signing out with c
   await expect(waiting(page)).toHaveText('1 waiting to sync');
   await expect(page.getByTestId('sync-status').getByRole('link', { name: 'Sign in' })).toBeVisible();
 
-  await signInThroughForm(page, DEMO.qcTechnician);
+  await signInThroughForm(page, email);
   await expect(waiting(page)).toHaveText('0 waiting to sync', { timeout: 20_000 });
   expect(await query('SELECT revision FROM bench_entries WHERE id = ?', [id])).toEqual([{ revision: 1 }]);
 

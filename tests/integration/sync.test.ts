@@ -3,7 +3,8 @@ import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { v7 } from 'uuid';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Client, DEMO, mailTo, signedIn } from '../support/http';
+import { hash } from '@node-rs/argon2';
+import { Client, mailTo, signedIn } from '../support/http';
 import { closeDb, makeSite, query, testDb } from '../support/db';
 import { SiteSequence } from '@/db/access/sync-sequence';
 import { insertChanges, upsertRecords } from '@/db/access/sync-records';
@@ -25,6 +26,25 @@ async function as(s: Site, role: 'technician' | 'supervisor' | 'supervisor2' | '
 }
 
 const now = () => new Date().toISOString();
+
+/**
+ * A fresh account on the demo site (which has the seeded retired and in-force editions), so these
+ * tests do not spend the shared demo accounts' sign-in rate limit.
+ */
+async function demoSiteUser(role: 'technician' | 'supervisor'): Promise<Who> {
+  const [demo] = await query<{ id: string }>("SELECT id FROM sites WHERE code = 'calder-reach'");
+  const id = v7();
+  const email = `sync-${role}-${id.slice(-12)}@calder-reach.test`;
+  await query("INSERT INTO users (id, site_id, email, display_name, role, status, password_hash, created_at) VALUES (?, ?, ?, ?, ?, 'active', ?, UTC_TIMESTAMP(3))", [
+    id,
+    demo!.id,
+    email,
+    `Sync test ${role}`,
+    role,
+    await hash('a-test-password'),
+  ]);
+  return { client: await signedIn(email, 'a-test-password'), userId: id, siteId: demo!.id, deviceId: v7() };
+}
 
 function benchEntry(who: Who, fields: Record<string, unknown> = {}) {
   const t = now();
@@ -428,9 +448,8 @@ describe('sheets: server recompute and access rules', () => {
   });
 
   it('edition drift: a sheet pinned to a retired edition whose numbers differ under the edition in force is queued for review', async () => {
-    const t = await signedIn(DEMO.technician);
-    const me = (await t.get<{ userId: string; siteId: string }>('/api/v1/me')).body;
-    const w: Who = { client: t, userId: me.userId, siteId: me.siteId, deviceId: v7() };
+    const w = await demoSiteUser('technician');
+    const me = { siteId: w.siteId };
     const eds = await query<{ id: string; state: string }>("SELECT id, state FROM editions WHERE site_id = ? AND state IN ('retired', 'in_force') ORDER BY number", [me.siteId]);
     const retired = eds.find((e) => e.state === 'retired')!;
     const inForce = eds.find((e) => e.state === 'in_force')!;
@@ -457,7 +476,7 @@ describe('sheets: server recompute and access rules', () => {
     const [o] = await pushOk(w, [mutation('sheet', s)]);
     expect(o).toMatchObject({ status: 'applied', revision: 1 });
     expect((o as { record: ServerRecord }).record.awaitingReview).toBe(true);
-    const list = await signedIn(DEMO.supervisor);
+    const list = (await demoSiteUser('supervisor')).client;
     const conflicts = await list.get<{ conflicts: { id: string; recordId: string; kind: string }[] }>('/api/v1/conflicts?kind=drift');
     const drift = conflicts.body.conflicts.find((c) => c.recordId === s.id)!;
     expect(drift.kind).toBe('drift');
