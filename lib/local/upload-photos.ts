@@ -37,15 +37,21 @@ function set(p: Partial<PhotoUploadProgress>) {
 
 /** Upload every waiting photo once (single-flight). Never throws: problems are reported in the progress. */
 export function uploadWaitingPhotos(store: RungbookLocalDb): Promise<void> {
-  running ??= runUploads(store).finally(() => {
-    running = null;
-  });
+  running ??= runUploads(store)
+    .catch((error: unknown) => {
+      // e.g. the store was closed by a sign-out while a retry was pending: the blobs stay in it.
+      set({ message: error instanceof Error ? `Photo upload stopped: ${error.message}` : 'Photo upload stopped.', retryAt: null });
+    })
+    .finally(() => {
+      running = null;
+    });
   return running;
 }
 
 async function runUploads(store: RungbookLocalDb): Promise<void> {
   if (retryTimer) clearTimeout(retryTimer);
   retryTimer = null;
+  if (!store.isOpen()) return;
   const waiting = await store.photos.filter((p) => !p.uploadedAt).toArray();
   const problems = ((await store.meta.get(UPLOAD_PROBLEMS_KEY))?.value ?? {}) as UploadProblems;
   const todo = waiting.filter((p) => !problems[p.id]);
