@@ -127,6 +127,18 @@ test('the browser refuses a wrong type, a damaged image and a file too large, an
   await page.getByRole('button', { name: 'Save entry' }).click();
   await expect(page.locator('#bench-note-error')).toHaveText('Write a note or add a photo');
   await expect(waiting(page)).toHaveText('0 waiting to sync');
+
+  // The camera input asks the tablet for its rear camera; a large PNG from it is resized to a JPEG.
+  const camera = page.getByLabel('Photo from the camera');
+  await expect(camera).toHaveAttribute('capture', 'environment');
+  await expect(camera).toHaveAttribute('accept', 'image/*');
+  const png = await sharp({ create: { width: 3000, height: 1500, channels: 4, background: '#30507080' } }).png().toBuffer();
+  await camera.setInputFiles({ name: 'sight-glass.png', mimeType: 'image/png', buffer: png });
+  await expect(page.getByRole('list', { name: 'Photos to add' })).toContainText('2048×1024');
+  await expect(errors).toHaveCount(0);
+  await page.getByRole('button', { name: 'Leave out photo 1' }).click();
+  await expect(page.getByRole('list', { name: 'Photos to add' })).toHaveCount(0);
+  await expect(waiting(page)).toHaveText('0 waiting to sync');
 });
 
 test('a user of another site sees none of these entries and is refused the photo', async ({ page, browser }) => {
