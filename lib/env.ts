@@ -17,7 +17,9 @@ const envSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  // Sign-in attempts per 15 minutes, per e-mail address and per client address.
   RATE_LIMIT_SIGN_IN: z.coerce.number().int().positive().default(10),
+  RATE_LIMIT_SIGN_IN_IP: z.coerce.number().int().positive().default(50),
   RATE_LIMIT_TOKEN: z.coerce.number().int().positive().default(600),
 });
 

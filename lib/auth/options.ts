@@ -43,7 +43,7 @@ export function authOptions(): NextAuthOptions {
           const limit = env().RATE_LIMIT_SIGN_IN;
           // Every attempt counts, right or wrong, per e-mail and per client address.
           const byEmail = await hitRateLimit(`sign-in:email:${email}`, limit, SIGN_IN_WINDOW_SECONDS);
-          const byIp = await hitRateLimit(`sign-in:ip:${clientIp(req?.headers)}`, limit * 5, SIGN_IN_WINDOW_SECONDS);
+          const byIp = await hitRateLimit(`sign-in:ip:${clientIp(req?.headers)}`, env().RATE_LIMIT_SIGN_IN_IP, SIGN_IN_WINDOW_SECONDS);
           if (!byEmail.ok || !byIp.ok) throw new Error('rate_limited');
           const [user] = email ? await db().select().from(users).where(eq(users.email, email)) : [];
           const ok = await verifyPassword(user?.passwordHash ?? null, password);

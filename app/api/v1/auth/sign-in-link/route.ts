@@ -14,7 +14,7 @@ export const POST = route({ public: true }, async ({ body, req }) => {
   const { email } = await body(signInLinkSchema);
   const ip = req.headers.get('x-forwarded-for')?.split(',')[0]?.trim() || 'local';
   await enforceRateLimit(`sign-in:email:${email}`, env().RATE_LIMIT_SIGN_IN, SIGN_IN_WINDOW_SECONDS);
-  await enforceRateLimit(`sign-in:ip:${ip}`, env().RATE_LIMIT_SIGN_IN * 5, SIGN_IN_WINDOW_SECONDS);
+  await enforceRateLimit(`sign-in:ip:${ip}`, env().RATE_LIMIT_SIGN_IN_IP, SIGN_IN_WINDOW_SECONDS);
   const [user] = await db().select().from(users).where(eq(users.email, email));
   if (user?.status === 'active') {
     const secret = await createOneTimeLink(user.id, 'sign_in');
