@@ -1,6 +1,8 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { expect, test as base, type Page } from '@playwright/test';
-import { DEMO, DEMO_PASSWORD } from '../support/http';
+import { closeDb } from '../support/db';
+import { DEMO_PASSWORD } from '../support/http';
+import { demoSiteUser } from './workbench-support';
 
 // Serve the worker built for this slot's build (parallel slots share public/sw.js).
 const test = base.extend({
@@ -13,6 +15,8 @@ const test = base.extend({
     await provide(context);
   },
 });
+
+test.afterAll(closeDb);
 
 function storedPages(page: Page): Promise<string[]> {
   return page.evaluate(async () => {
@@ -28,7 +32,7 @@ function storedPages(page: Page): Promise<string[]> {
 test('a sheet made offline is solved, saved and reopened offline, and syncs when the device is back online', async ({ page, context }) => {
   test.setTimeout(120_000);
   await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(DEMO.technician);
+  await page.getByLabel('E-mail').fill(await demoSiteUser('technician', 'Workbench offline technician'));
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
   await expect(page.getByRole('navigation', { name: 'Main' })).toBeVisible();

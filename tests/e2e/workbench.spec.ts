@@ -1,10 +1,12 @@
 import { readFile } from 'node:fs/promises';
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Browser, type Page } from '@playwright/test';
-import { DEMO, DEMO_PASSWORD } from '../support/http';
-import { pdfText } from './workbench-support';
+import { closeDb } from '../support/db';
+import { DEMO_PASSWORD } from '../support/http';
+import { demoSiteUser, pdfText } from './workbench-support';
 
 test.describe.configure({ timeout: 120_000 });
+test.afterAll(closeDb);
 
 async function signedInPage(browser: Browser, email: string): Promise<Page> {
   const context = await browser.newContext({ viewport: { width: 768, height: 1024 }, hasTouch: true, acceptDownloads: true });
@@ -33,7 +35,7 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   const stamp = Date.now().toString(36);
   const title = `CaCl2 brine feed check ${stamp}`;
   const lot = `CR-${stamp}`;
-  const tech = await signedInPage(browser, DEMO.technician);
+  const tech = await signedInPage(browser, await demoSiteUser('technician', 'Workbench dissolver technician'));
   await newSheet(tech, 'cycle');
   await tech.getByLabel('Title').fill(title);
   await tech.getByLabel('Formula of the salt').fill('CaCl2');
@@ -88,7 +90,7 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   await expect(tech.getByRole('button', { name: 'Sign off' })).toBeDisabled();
 
   // A supervisor other than the author signs it off on their own device.
-  const sup = await signedInPage(browser, DEMO.qcSupervisor);
+  const sup = await signedInPage(browser, await demoSiteUser('supervisor', 'Workbench QC supervisor'));
   await sup.goto('/sheets');
   await sup.getByRole('searchbox', { name: 'Search' }).fill(stamp);
   await expect(sup.getByRole('link', { name: title })).toBeVisible({ timeout: 30_000 });
@@ -103,7 +105,7 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   // The PDF record, read back as text.
   const [download] = await Promise.all([sup.waitForEvent('download'), sup.getByRole('button', { name: 'Export PDF' }).click()]);
   const text = await pdfText(await readFile((await download.path())!));
-  for (const want of [title, lot, 'First ionization energy of Ca', 'OVERRIDE', 'Rechecked against the spectroscopic table', 'QC lab handbook check value', 'First electron-gain enthalpy of Cl', 'Convention:', 'formation', 'Basis:', 'Ladder', 'Model check', 'Signed off by QC supervisor']) {
+  for (const want of [title, lot, 'First ionization energy of Ca', 'OVERRIDE', 'Rechecked against the spectroscopic table', 'QC lab handbook check value', 'First electron-gain enthalpy of Cl', 'Convention:', 'formation', 'Basis:', 'Ladder', 'Model check', 'Signed off by Workbench QC supervisor']) {
     expect(text).toContain(want);
   }
 
@@ -122,7 +124,7 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
 });
 
 test('the author of a sheet cannot sign it off, even as a supervisor', async ({ browser }) => {
-  const page = await signedInPage(browser, DEMO.supervisor);
+  const page = await signedInPage(browser, await demoSiteUser('supervisor', 'Workbench shift supervisor'));
   await newSheet(page, 'cycle');
   await page.getByLabel('Title').fill(`KBr own sheet ${Date.now().toString(36)}`);
   await page.getByLabel('Formula of the salt').fill('KBr');
@@ -135,7 +137,7 @@ test('the author of a sheet cannot sign it off, even as a supervisor', async ({ 
 });
 
 test('an unbalanced reaction is refused naming the element, and the typed reaction is kept', async ({ browser }) => {
-  const page = await signedInPage(browser, DEMO.technician);
+  const page = await signedInPage(browser, await demoSiteUser('technician', 'Workbench technician'));
   await newSheet(page, 'reaction');
   const reaction = 'CaO(cr) + HCl(aq) -> CaCl2(aq) + H2O(l)';
   await page.getByLabel('Reaction', { exact: true }).fill(reaction);
@@ -147,7 +149,7 @@ test('an unbalanced reaction is refused naming the element, and the typed reacti
 });
 
 test('a calorimetry sheet names the hexahydrate for an endothermic run', async ({ browser }) => {
-  const page = await signedInPage(browser, DEMO.qcTechnician);
+  const page = await signedInPage(browser, await demoSiteUser('technician', 'Workbench QC technician'));
   await newSheet(page, 'calorimetry');
   // An invented run: 10.954 g (0.0500 mol of CaCl2·6H2O, 219.07 g/mol) into 100 g of water, 25.00 → 23.50 °C.
   // Over (110.954 g × 4.184 J/(g·K)) that is +13.9 kJ/mol absorbed, near the hexahydrate and far from CaCl2 (about −81).
@@ -162,7 +164,7 @@ test('a calorimetry sheet names the hexahydrate for an endothermic run', async (
 });
 
 test('the main screens have no serious or critical accessibility problems', async ({ browser }) => {
-  const page = await signedInPage(browser, DEMO.technician);
+  const page = await signedInPage(browser, await demoSiteUser('technician', 'Workbench technician'));
   await page.goto('/sheets');
   await expect(page.getByRole('heading', { level: 1, name: 'Sheets' })).toBeVisible();
   await noSeriousViolations(page);
@@ -189,7 +191,7 @@ test('the main screens have no serious or critical accessibility problems', asyn
 });
 
 test('the list duplicates a sheet and deletes the copy (a tombstone); the unit is the user’s choice', async ({ browser }) => {
-  const page = await signedInPage(browser, DEMO.technician);
+  const page = await signedInPage(browser, await demoSiteUser('technician', 'Workbench technician'));
   const stamp = Date.now().toString(36);
   await newSheet(page, 'cycle');
   await page.getByLabel('Title').fill(`LiCl list check ${stamp}`);

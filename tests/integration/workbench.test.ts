@@ -3,7 +3,9 @@
 // sign-off rules hold, and the energy-unit preference is saved.
 import { v7 } from 'uuid';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Client, DEMO, signedIn } from '../support/http';
+import { closeDb } from '../support/db';
+import { Client, signedIn } from '../support/http';
+import { demoSiteUser } from '../e2e/workbench-support';
 import type { MutationOutcome, PushResponse } from '@/lib/sync/protocol';
 import { buildCycleSheet, EMPTY_CYCLE_FORM } from '@/lib/workbench/cycle-sheet';
 import { buildDissolutionSheet, EMPTY_DISSOLUTION_FORM } from '@/lib/workbench/dissolution-sheet';
@@ -31,16 +33,19 @@ let qcSup: Who;
 let values: ValueSource;
 
 beforeAll(async () => {
-  [tech, sup, qcSup] = await Promise.all([who(DEMO.technician), who(DEMO.supervisor), who(DEMO.qcSupervisor)]);
+  // Fresh accounts on the demo site: the shared demo accounts' sign-in rate limit is left alone.
+  [tech, sup, qcSup] = await Promise.all([
+    demoSiteUser('technician', 'Workbench API technician').then(who),
+    demoSiteUser('supervisor', 'Workbench API supervisor').then(who),
+    demoSiteUser('supervisor', 'Workbench API second supervisor').then(who),
+  ]);
   const current = await tech.client.get('/api/v1/editions/current');
   const edition = editionFromCache(current.body);
   if (!edition) throw new Error('no edition in force on the demo site');
   values = makeValueSource(edition);
 });
 
-afterAll(async () => {
-  await tech.client.patch('/api/v1/me/preferences', { preferredUnit: 'kJ/mol' });
-});
+afterAll(closeDb);
 
 function sheetFrom(author: Who, kind: 'cycle' | 'dissolution', b: { request: unknown; inputs: unknown[]; outcome: unknown; editionIds: string[] }, status: 'draft' | 'submitted') {
   const t = new Date().toISOString();
