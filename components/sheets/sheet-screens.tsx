@@ -4,6 +4,8 @@
 // sheet — including sheets made offline, which have no server-rendered page.
 import Link from 'next/link';
 import { useSearchParams } from 'next/navigation';
+import { BenchStoreGate } from '@/components/bench/bench-site-context';
+import { SheetBenchEntries } from '@/components/bench/sheet-bench-entries';
 import { useSheet } from '@/lib/local';
 import { SHEET_KINDS, type SheetKind } from '@/lib/sheets/sheet-schema';
 import { SheetEditor } from './sheet-editor';
@@ -41,5 +43,15 @@ export function OpenSheetScreen({ ctx }: { ctx: WorkbenchContext }) {
       </p>
     );
   }
-  return <SheetEditor key={record.content.id} ctx={ctx} kind={record.content.kind} record={record} />;
+  return (
+    <div className="space-y-6">
+      <SheetEditor key={record.content.id} ctx={ctx} kind={record.content.kind} record={record} />
+      {/* Notes and photos from the bench, tied to this sheet (the bench log's own component). */}
+      <div className="panel print:hidden">
+        <BenchStoreGate identity={ctx.identity} areas={ctx.areas} people={ctx.people}>
+          <SheetBenchEntries sheetId={record.content.id} lotRef={record.content.lotRef} />
+        </BenchStoreGate>
+      </div>
+    </div>
+  );
 }

@@ -101,6 +101,8 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   await expect(sup.getByTestId('sync-state')).toHaveText('synced', { timeout: 30_000 });
   await expect(sup.getByRole('button', { name: 'Save', exact: true })).toHaveCount(0);
   await expect(sup.getByText('signed off and locked')).toBeVisible();
+  await expect(sup.getByRole('heading', { name: 'Bench entries' })).toBeVisible();
+  await noSeriousViolations(sup);
 
   // The PDF record, read back as text.
   const [download] = await Promise.all([sup.waitForEvent('download'), sup.getByRole('button', { name: 'Export PDF' }).click()]);
