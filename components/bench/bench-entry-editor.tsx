@@ -45,7 +45,10 @@ export function BenchEntryEditor({ existing, defaults, onSaved, onCancel }: Benc
     for (const r of sheets ?? []) if (r.content.lotRef) s.add(r.content.lotRef);
     return [...s].sort();
   }, [allEntries, sheets]);
-  const sheetChoices = (sheets ?? []).filter((s) => (lot && s.content.lotRef === lot) || s.id === form.getValues('sheetId'));
+  const chosenSheet = form.watch('sheetId');
+  // The chosen sheet always stays among the options (else the select would show "none" while the form keeps the id).
+  const sheetChoices = (sheets ?? []).filter((s) => !s.content.deleted && ((lot && s.content.lotRef === lot) || s.id === chosenSheet)).map((s) => ({ id: s.id, label: `${s.content.title} (${s.content.kind})` }));
+  if (chosenSheet && sheets && !sheetChoices.some((c) => c.id === chosenSheet)) sheetChoices.push({ id: chosenSheet, label: 'A sheet not on this device yet' });
 
   const previews = useMemo(() => photos.map((p) => ({ id: p.id, url: URL.createObjectURL(p.blob) })), [photos]);
   useEffect(() => () => previews.forEach((p) => URL.revokeObjectURL(p.url)), [previews]);
@@ -137,15 +140,19 @@ export function BenchEntryEditor({ existing, defaults, onSaved, onCancel }: Benc
           <label htmlFor="bench-sheetId" className="field-label">
             Sheet <span className="font-normal">(optional)</span>
           </label>
-          <select className="field-input" {...fieldProps('sheetId')} {...form.register('sheetId')}>
-            <option value="">Not tied to a sheet</option>
-            {sheetChoices.map((s) => (
-              <option key={s.id} value={s.id}>
-                {s.content.title} ({s.content.kind})
-              </option>
-            ))}
-          </select>
-          {lot && sheetChoices.length === 0 && <p className="mt-1 text-xs text-ink-soft">No sheets for lot {lot} on this device.</p>}
+          {sheets === undefined ? (
+            <p className="mt-1 text-sm text-ink-soft">Reading this device’s sheets…</p>
+          ) : (
+            <select className="field-input" {...fieldProps('sheetId')} {...form.register('sheetId')}>
+              <option value="">Not tied to a sheet</option>
+              {sheetChoices.map((c) => (
+                <option key={c.id} value={c.id}>
+                  {c.label}
+                </option>
+              ))}
+            </select>
+          )}
+          {lot && sheets && sheetChoices.length === 0 && <p className="mt-1 text-xs text-ink-soft">No sheets for lot {lot} on this device.</p>}
           {fieldError('sheetId')}
         </div>
       </div>

@@ -26,7 +26,7 @@ const unique = (prefix: string) => `${prefix}-${Date.now().toString(36).slice(-5
 const waiting = (page: Page) => page.getByTestId('sync-waiting');
 
 async function fillEntry(page: Page, { lot, note, tags, photo }: { lot: string; note: string; tags: string; photo?: Buffer }) {
-  await page.getByLabel('Lot').fill(lot);
+  await page.getByLabel('Lot', { exact: true }).fill(lot);
   await page.getByLabel('Note').fill(note);
   await page.getByLabel(/^Tags/).fill(tags);
   if (photo) {
@@ -111,7 +111,7 @@ test('a note with a photo made offline syncs and appears, photo and all, on anot
 test('the browser refuses a wrong type, a damaged image and a file too large, and keeps nothing', async ({ page }) => {
   await signInThroughForm(page, DEMO.qcTechnician);
   await page.goto('/bench/new?lot=CR-CB-2611-12');
-  await expect(page.getByLabel('Lot')).toHaveValue('CR-CB-2611-12');
+  await expect(page.getByLabel('Lot', { exact: true })).toHaveValue('CR-CB-2611-12');
   const input = page.getByLabel('Photo files');
   const errors = page.getByTestId('photo-errors');
 
@@ -227,10 +227,10 @@ test('another technician reads an entry but may not change it; a supervisor corr
   await sup.getByRole('button', { name: 'Edit' }).click();
   await expect(sup.getByText(/You are correcting an entry by Dissolver hall technician/)).toBeVisible();
   await sup.getByLabel('Note').fill('');
-  await sup.getByLabel('Lot').fill('');
+  await sup.getByLabel('Lot', { exact: true }).fill('');
   await sup.getByRole('button', { name: 'Save changes' }).click();
   await expect(sup.locator('#bench-lotRef-error')).toHaveText('Give the lot this entry belongs to');
-  await sup.getByLabel('Lot').fill('CR-LC-2611-04');
+  await sup.getByLabel('Lot', { exact: true }).fill('CR-LC-2611-04');
   await sup.getByLabel('Note').fill('Drum 4 received. Label reads lithium chloride, anhydrous, 25 kg net. Seal intact. (Corrected: drum 4, not drum 3.)');
   await sup.getByRole('button', { name: 'Save changes' }).click();
   await expect(sup.getByText('Saved on this device.')).toBeVisible();
@@ -246,6 +246,50 @@ test('another technician reads an entry but may not change it; a supervisor corr
   // The QC technician's device gets the correction with its next sync.
   await page.getByRole('button', { name: 'Sync now' }).click();
   await expect(page.getByTestId('entry-note')).toContainText('(Corrected: drum 4, not drum 3.)', { timeout: 20_000 });
+});
+
+test('a lot lists its calorimetry run with the server’s verdict, and an entry added for the run sits under it', async ({ page }) => {
+  const lot = unique('CR-LC-2611');
+  await signInThroughForm(page, DEMO.qcTechnician);
+  await page.goto('/bench');
+  await page.waitForFunction(() => !!(window as unknown as { rungbook?: { local?: unknown } }).rungbook?.local, null, { timeout: 15_000 });
+  // A calorimetry sheet saved through the same write path the workbench uses. The numbers are
+  // test inputs for the engine (a 2 g sample warming 100 g of water by about 4 K), not check values.
+  const sheetId = await page.evaluate(async (lotRef) => {
+    const local = (window as unknown as { rungbook: { local: { newSheet(f: object): { id: string }; saveSheet(s: object): Promise<unknown>; syncNow(): Promise<void> } } }).rungbook.local;
+    const sheet = local.newSheet({
+      kind: 'calorimetry',
+      title: `Form check ${lotRef}`,
+      lotRef,
+      problem: {
+        kind: 'calorimetry',
+        problem: { sampleMassG: '2.000', waterMassG: '100.0', temperatures: { beforeC: '20.00', afterC: '24.09' }, candidates: [{ formula: 'LiCl', predictedEnthalpyOfSolution: '-37.0' }, { formula: 'LiCl·H2O', predictedEnthalpyOfSolution: '-19.0' }] },
+      },
+    });
+    await local.saveSheet(sheet);
+    await local.syncNow();
+    return sheet.id;
+  }, lot);
+  await expect.poll(async () => (await query('SELECT id FROM sheets WHERE id = ? AND server_result IS NOT NULL', [sheetId])).length, { timeout: 20_000 }).toBe(1);
+  const [row] = await query<{ text: string }>("SELECT JSON_UNQUOTE(JSON_EXTRACT(server_result, '$.result.bestMatch.text')) AS text FROM sheets WHERE id = ?", [sheetId]);
+  expect(row?.text).toBeTruthy();
+
+  await page.goto(`/bench?lot=${encodeURIComponent(lot)}`);
+  const run = page.locator(`[data-sheet-id="${sheetId}"]`);
+  await expect(run.getByRole('link', { name: `Form check ${lot}`, exact: true })).toHaveAttribute('href', `/sheets/open?id=${sheetId}`);
+  await expect(run).toContainText(`Verdict: ${row!.text}`, { timeout: 20_000 });
+  await expect(run).not.toContainText('this device’s result');
+
+  await run.getByRole('link', { name: `Add entry for sheet Form check ${lot}` }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'New bench entry' })).toBeVisible();
+  await expect(page.getByLabel('Lot', { exact: true })).toHaveValue(lot);
+  await expect(page.getByLabel(/^Sheet/)).toHaveValue(sheetId);
+  await page.getByLabel('Note').fill('Bath drifted 0.02 K/min before mixing; readings kept.');
+  await page.getByRole('button', { name: 'Save entry' }).click();
+  await expect(page).toHaveURL(/\/bench\/open\?id=/);
+  await expect(page.getByRole('link', { name: `Form check ${lot}`, exact: true })).toBeVisible();
+  await page.goto(`/bench?lot=${encodeURIComponent(lot)}`);
+  await expect(page.getByRole('list', { name: `Entries of sheet Form check ${lot}` }).getByRole('link', { name: /Bath drifted/ })).toBeVisible();
 });
 
 test('the bench log has no serious accessibility problems and works by keyboard', async ({ page }) => {
