@@ -1,21 +1,15 @@
 'use client';
-// Opens the signed-in user's local store for the sheet screens (idempotent; the app shell may
-// already have opened it) and starts background sync once per tab.
+// Makes sure the signed-in user's local store is open for the sheet screens. The app shell's sync
+// provider opens it too and runs the sync triggers; opening is idempotent, so whichever comes first
+// wins and the screen never waits on the other.
 import { useEffect } from 'react';
-import { openLocalStore, startSyncTriggers, useLocalIdentity, useLocalStore, type LocalIdentity } from '@/lib/local';
-
-let syncStarted = false;
+import { openLocalStore, useLocalIdentity, useLocalStore, type LocalIdentity } from '@/lib/local';
 
 export function useWorkbenchStore(identity: LocalIdentity) {
   const store = useLocalStore();
   const who = useLocalIdentity();
   useEffect(() => {
-    void openLocalStore(identity).then(() => {
-      if (!syncStarted) {
-        syncStarted = true;
-        startSyncTriggers();
-      }
-    });
+    void openLocalStore(identity);
   }, [identity]);
   return { ready: store !== null && who?.userId === identity.userId, who: who ?? identity };
 }
