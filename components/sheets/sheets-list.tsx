@@ -14,7 +14,7 @@ import {
 import Link from 'next/link';
 import { useEffect, useMemo, useState } from 'react';
 import { warmOfflinePages } from '@/components/pwa/sw-messages';
-import { deleteSheet, newSheet, saveSheet, syncNow, useSheets, useSyncState, type LocalRecord, type Sheet } from '@/lib/local';
+import { deleteSheet, newSheet, saveSheet, syncNow, useSheets, type LocalRecord, type Sheet } from '@/lib/local';
 import { SHEET_KINDS, SHEET_STATUSES } from '@/lib/sheets/sheet-schema';
 import { mayEdit, KIND_TEXT, STATUS_TEXT } from '@/lib/workbench/sheet-rules';
 import { sheetHeadline, sheetSearchText, sheetSubject } from '@/lib/workbench/sheet-summary';
@@ -40,7 +40,6 @@ const col = createColumnHelper<Row>();
 export function SheetsList({ ctx }: SheetsListProps) {
   const { ready } = useWorkbenchStore(ctx.identity);
   const records = useSheets();
-  const sync = useSyncState();
   const [unit] = useUnit(ctx.identity.userId, ctx.preferredUnit);
   const [search, setSearch] = useState('');
   const [filters, setFilters] = useState<ColumnFiltersState>([]);
@@ -148,18 +147,9 @@ export function SheetsList({ ctx }: SheetsListProps) {
 
   return (
     <div className="space-y-6">
-      <div className="flex flex-wrap items-end justify-between gap-4">
-        <div>
-          <h1>Sheets</h1>
-          <p className="text-sm text-ink-soft">
-            {sync ? (sync.waiting > 0 ? `${sync.waiting} change${sync.waiting === 1 ? '' : 's'} waiting to sync` : 'Everything on this device is synced') : 'Opening this device’s store…'}
-            {sync?.phase === 'pushing' || sync?.phase === 'pulling' ? ` · syncing (${sync.sent} of ${sync.total} sent)` : ''}
-            {sync?.message ? ` · ${sync.message}` : ''}
-          </p>
-        </div>
-        <button type="button" className="btn-quiet" onClick={() => void syncNow()}>
-          Sync now
-        </button>
+      <div>
+        <h1>Sheets</h1>
+        <p className="text-sm text-ink-soft">Saved calculations of the site on this device: lattice cycles, dissolution and batch heat, reactions and calorimetry runs.</p>
       </div>
       <nav aria-label="New sheet" className="grid gap-3 sm:grid-cols-4">
         {SHEET_KINDS.map((k) => (
