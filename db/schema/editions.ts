@@ -1,6 +1,5 @@
 import {
   boolean,
-  datetime,
   index,
   int,
   json,
@@ -11,12 +10,10 @@ import {
   uniqueIndex,
   varchar,
 } from 'drizzle-orm/mysql-core';
+import { at, id, ref } from './columns';
 import { sites, users } from './foundation';
 
 // Reference editions (design.md §5): versioned, per-site sets of reference values.
-const id = () => varchar('id', { length: 36 }).primaryKey();
-const ref = (name: string) => varchar(name, { length: 36 });
-const at = (name: string) => datetime(name, { mode: 'date', fsp: 3 });
 
 export const EDITION_STATES = ['draft', 'in_review', 'in_force', 'retired'] as const;
 export type EditionState = (typeof EDITION_STATES)[number];

@@ -1,6 +1,5 @@
 import {
   bigint,
-  datetime,
   index,
   int,
   json,
@@ -9,11 +8,8 @@ import {
   uniqueIndex,
   varchar,
 } from 'drizzle-orm/mysql-core';
+import { at, id, ref } from './columns';
 
-// Ids are app-made UUIDv7 strings (no reliance on auto-increment order across Galera nodes).
-const id = () => varchar('id', { length: 36 }).primaryKey();
-const ref = (name: string) => varchar(name, { length: 36 });
-const at = (name: string) => datetime(name, { mode: 'date', fsp: 3 });
 
 export const ROLES = ['technician', 'supervisor', 'admin'] as const;
 export type Role = (typeof ROLES)[number];

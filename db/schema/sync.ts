@@ -1,11 +1,9 @@
-import { bigint, boolean, datetime, index, int, json, mysqlEnum, mysqlTable, primaryKey, varchar } from 'drizzle-orm/mysql-core';
+import { bigint, boolean, index, int, json, mysqlEnum, mysqlTable, primaryKey, varchar } from 'drizzle-orm/mysql-core';
+import { at, id, ref } from './columns';
 
 // Synced records and the sync machinery (design.md §4). Record ids are made on devices (UUIDv7);
 // ordering comes from a per-site sequence counter locked FOR UPDATE in each writing transaction,
 // never from auto-increment (Galera-safe).
-const id = () => varchar('id', { length: 36 }).primaryKey();
-const ref = (name: string) => varchar(name, { length: 36 });
-const at = (name: string) => datetime(name, { mode: 'date', fsp: 3 });
 
 export const SYNC_ENTITIES = ['sheet', 'bench_entry', 'photo'] as const;
 export const SHEET_KIND_VALUES = ['cycle', 'dissolution', 'reaction', 'calorimetry'] as const;
