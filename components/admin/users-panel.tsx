@@ -2,9 +2,10 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { DataTable } from '@/components/ui/data-table';
 import { postJson } from '@/components/ui/post-json';
 import { inviteUserSchema } from '@/lib/validation/admin';
 
@@ -91,32 +92,7 @@ export function UsersPanel({ selfId }: { selfId: string }) {
     <section aria-labelledby="users-title" className="panel space-y-4">
       <h2 id="users-title">People</h2>
       {users.isError ? <p role="alert" className="field-error">{(users.error as Error).message}</p> : null}
-      <div className="overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <thead className="border-b border-rule text-ink-soft">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => (
-                  <th key={h.id} scope="col" className="py-2 pr-3 font-medium">
-                    {flexRender(h.column.columnDef.header, h.getContext())}
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((r) => (
-              <tr key={r.id} className="border-b border-rule/60">
-                {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className="py-2 pr-3">
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable table={table} caption="People of this site" />
       {message ? (
         <p role={message.kind === 'error' ? 'alert' : 'status'} className={message.kind === 'error' ? 'field-error' : 'text-sm text-verdigris-700'}>
           {message.text}

@@ -3,7 +3,6 @@
 import {
   type ColumnFiltersState,
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getPaginationRowModel,
@@ -14,6 +13,7 @@ import {
 import Link from 'next/link';
 import { useId, useMemo, useState } from 'react';
 import { PROPERTIES, PROPERTY_CODES, type ReferenceValue } from '@/lib/reference/properties';
+import { DataTable } from '@/components/ui/data-table';
 import { historyHref, propertyLabel, qualifiers } from './format';
 
 export interface ReferenceTableProps {
@@ -183,43 +183,7 @@ export function ReferenceTable({ values, caption, historyLinks = true, pageSize 
       <p role="status" className="text-sm text-ink-soft">
         {shown} of {values.length} values
       </p>
-      <div className="overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <caption className="sr-only">{caption}</caption>
-          <thead className="border-b border-rule text-ink-soft">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" className="py-2 pr-3 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" className="inline-flex min-h-touch items-center gap-1 font-medium" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((r) => (
-              <tr key={r.id} className="border-b border-rule/60 align-top">
-                {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className="py-2 pr-3">
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable table={table} caption={caption} />
       <nav aria-label={`Pages of ${caption}`} className="flex flex-wrap items-center gap-2">
         <button type="button" className="btn-quiet" onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
           Previous page
