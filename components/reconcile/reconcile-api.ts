@@ -1,5 +1,5 @@
 // Client-side calls and types of the reconcile endpoints (GET /api/v1/conflicts…, POST …/resolve).
-import { postJson } from '@/components/ui/post-json';
+import { getJson, postJson } from '@/components/ui/post-json';
 
 export interface ConflictSummary {
   id: string;
@@ -29,12 +29,6 @@ export type ResolveBody =
   | { action: 'keep_pinned' }
   | { action: 'resolve_in_force' };
 
-async function getJson<T>(url: string): Promise<T> {
-  const res = await fetch(url, { cache: 'no-store' });
-  const body = (await res.json().catch(() => null)) as (T & { error?: { message?: string } }) | null;
-  if (!res.ok) throw new Error(body?.error?.message ?? `The server answered ${res.status}.`);
-  return body as T;
-}
 
 export const fetchConflicts = (status: 'open' | 'resolved') => getJson<{ conflicts: ConflictSummary[] }>(`/api/v1/conflicts?status=${status}`).then((b) => b.conflicts);
 export const fetchConflict = (id: string) => getJson<ConflictDetail>(`/api/v1/conflicts/${encodeURIComponent(id)}`);

@@ -1,27 +1,11 @@
 // Display helpers shared by the reference and edition screens. Pure module.
+import type { Edition } from '@/lib/editions/edition';
+export { getJson } from '@/components/ui/post-json';
 import { PROPERTIES, type PropertyCode, type ReferenceValue } from '@/lib/reference/properties';
 
-export type EditionState = 'draft' | 'in_review' | 'in_force' | 'retired';
-
-export interface EditionInfo {
-  id: string;
-  number: number;
-  state: EditionState;
-  baseEditionId: string | null;
-  changeSummary: string;
-  authorUserId: string;
-  approverUserId: string | null;
-  rejectedByUserId: string | null;
-  rejectionReason: string | null;
-  createdAt: string;
-  updatedAt: string;
-  submittedAt: string | null;
-  inForceAt: string | null;
-  retiredAt: string | null;
-  revision: number;
-  valueCount: number;
-  etag: string;
-}
+/** An edition as the API sends it (see lib/editions/edition.ts). */
+export type EditionInfo = Edition;
+export type EditionState = Edition['state'];
 
 export const STATE_LABEL: Record<EditionState, string> = {
   draft: 'Draft',
@@ -56,14 +40,3 @@ export function historyHref(v: Pick<ReferenceValue, 'species' | 'phase' | 'prope
 }
 
 /** GET JSON from our API; throws the server's own message on failure. */
-export async function getJson<T>(url: string): Promise<T> {
-  let res: Response;
-  try {
-    res = await fetch(url, { headers: { accept: 'application/json' } });
-  } catch {
-    throw new Error('No connection to the server. Check the network and try again.');
-  }
-  const data = await res.json().catch(() => null);
-  if (!res.ok) throw new Error(data?.error?.message ?? `The server answered ${res.status}.`);
-  return data as T;
-}

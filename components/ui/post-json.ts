@@ -1,4 +1,4 @@
-/** Same-origin JSON request from our pages, with the server's error message on failure. */
+/** Same-origin JSON requests from our pages, with the server's error message on failure. */
 export type JsonResult<T = unknown> =
   | { ok: true; status: number; data: T }
   | { ok: false; status: number; message: string; fields?: { field: string; message: string }[] };
@@ -12,4 +12,17 @@ export async function postJson<T = unknown>(url: string, body: unknown, method =
   } catch {
     return { ok: false, status: 0, message: 'No connection to the server. Check the network and try again.' };
   }
+}
+
+/** GET JSON; a failure throws an Error carrying the server's message (for TanStack Query). */
+export async function getJson<T>(url: string): Promise<T> {
+  let res: Response;
+  try {
+    res = await fetch(url, { headers: { accept: 'application/json' }, cache: 'no-store' });
+  } catch {
+    throw new Error('No connection to the server. Check the network and try again.');
+  }
+  const data = await res.json().catch(() => null);
+  if (!res.ok) throw new Error(data?.error?.message ?? `The server answered ${res.status}.`);
+  return data as T;
 }

@@ -2,7 +2,8 @@ import 'server-only';
 import { and, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db/client';
 import { editionValues, refSpecies } from '@/db/schema';
-import type { HydrationScale, Phase, PropertyCode, ReferenceValue } from '@/lib/reference/properties';
+import type { ReferenceValue } from '@/lib/reference/properties';
+import { toReferenceValue } from './editions';
 
 /** The value with one key in each of several editions (editionId → value). */
 export async function getEditionValuesByKey(editionIds: string[], key: string): Promise<Map<string, ReferenceValue>> {
@@ -14,21 +15,7 @@ export async function getEditionValuesByKey(editionIds: string[], key: string): 
     .innerJoin(refSpecies, eq(refSpecies.id, editionValues.speciesId))
     .where(and(inArray(editionValues.editionId, editionIds), eq(editionValues.valueKey, key)));
   for (const { editionId, v, s } of rows) {
-    out.set(editionId, {
-      species: s.formula,
-      phase: s.phase as Phase,
-      charge: s.charge,
-      property: v.property as PropertyCode,
-      value: v.value,
-      uncertainty: v.uncertainty,
-      unit: v.unit,
-      ...(v.coordination !== null ? { coordination: v.coordination } : {}),
-      ...(v.structure !== null ? { structure: v.structure } : {}),
-      ...(v.scale !== null ? { scale: v.scale as HydrationScale } : {}),
-      source: v.source,
-      fromMemory: v.fromMemory,
-      ...(v.note !== null ? { note: v.note } : {}),
-    });
+    out.set(editionId, toReferenceValue({ ...v, species: s.formula, phase: s.phase, charge: s.charge }));
   }
   return out;
 }

@@ -1,36 +1,13 @@
 import 'server-only';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { db, type Db, type Tx } from '@/db/client';
-import { editions, editionValues, refSpecies, users, type EditionState } from '@/db/schema';
+import { editions, editionValues, refSpecies, users } from '@/db/schema';
 import type { HydrationScale, Phase, PropertyCode, ReferenceValue } from '@/lib/reference/properties';
+import type { Edition } from '@/lib/editions/edition';
 import { AppError } from '@/lib/server/errors';
 
 export type EditionRow = typeof editions.$inferSelect;
-
-/** An edition as the API and other features see it (dates as ISO strings). */
-export interface Edition {
-  id: string;
-  siteId: string;
-  number: number;
-  state: EditionState;
-  baseEditionId: string | null;
-  changeSummary: string;
-  authorUserId: string;
-  approverUserId: string | null;
-  rejectedByUserId: string | null;
-  rejectionReason: string | null;
-  createdAt: string;
-  updatedAt: string;
-  submittedAt: string | null;
-  rejectedAt: string | null;
-  inForceAt: string | null;
-  retiredAt: string | null;
-  revision: number;
-  valueCount: number;
-  contentHash: string | null;
-  /** Strong validator of the edition's body: changes whenever a value or the edition itself changes. */
-  etag: string;
-}
+export type { Edition } from '@/lib/editions/edition';
 
 export function editionEtag(row: Pick<EditionRow, 'id' | 'revision' | 'updatedAt'>): string {
   // Every step sets updatedAt (state, summary, rejection); every value change bumps the revision.
@@ -86,6 +63,39 @@ export async function getEditionOrThrow(siteId: string, editionId: string, tx: D
   return publicEdition(row);
 }
 
+/** One stored value (joined with its species) as a ReferenceValue; absent qualifiers are left out. */
+export function toReferenceValue(r: {
+  species: string;
+  phase: string;
+  charge: number;
+  property: string;
+  value: string;
+  uncertainty: string | null;
+  unit: string;
+  coordination: number | null;
+  structure: string | null;
+  scale: string | null;
+  source: string;
+  fromMemory: boolean;
+  note: string | null;
+}): ReferenceValue {
+  return {
+    species: r.species,
+    phase: r.phase as Phase,
+    charge: r.charge,
+    property: r.property as PropertyCode,
+    value: r.value,
+    uncertainty: r.uncertainty,
+    unit: r.unit,
+    ...(r.coordination !== null ? { coordination: r.coordination } : {}),
+    ...(r.structure !== null ? { structure: r.structure } : {}),
+    ...(r.scale !== null ? { scale: r.scale as HydrationScale } : {}),
+    source: r.source,
+    fromMemory: r.fromMemory,
+    ...(r.note !== null ? { note: r.note } : {}),
+  };
+}
+
 /** The values of one edition as ReferenceValues (decimals as strings), in species order. */
 export async function getEditionValues(editionId: string, tx: Db | Tx = db()): Promise<ReferenceValue[]> {
   const rows = await tx
@@ -108,21 +118,7 @@ export async function getEditionValues(editionId: string, tx: Db | Tx = db()): P
     .innerJoin(refSpecies, eq(refSpecies.id, editionValues.speciesId))
     .where(eq(editionValues.editionId, editionId))
     .orderBy(asc(editionValues.valueKey));
-  return rows.map((r) => ({
-    species: r.species,
-    phase: r.phase as Phase,
-    charge: r.charge,
-    property: r.property as PropertyCode,
-    value: r.value,
-    uncertainty: r.uncertainty,
-    unit: r.unit,
-    ...(r.coordination !== null ? { coordination: r.coordination } : {}),
-    ...(r.structure !== null ? { structure: r.structure } : {}),
-    ...(r.scale !== null ? { scale: r.scale as HydrationScale } : {}),
-    source: r.source,
-    fromMemory: r.fromMemory,
-    ...(r.note !== null ? { note: r.note } : {}),
-  }));
+  return rows.map(toReferenceValue);
 }
 
 /** All editions of a site, newest number first. */
