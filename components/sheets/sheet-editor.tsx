@@ -29,6 +29,8 @@ export interface SheetEditorProps {
   kind: SheetKind;
   /** The saved sheet (live from the local store), or null for a new one. */
   record: LocalRecord<Sheet> | null;
+  /** A new sheet's lot or batch reference, e.g. from the bench log's `?lot=`. */
+  initialLotRef?: string;
 }
 
 interface Meta {
@@ -38,7 +40,7 @@ interface Meta {
   note: string;
 }
 
-export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
+export function SheetEditor({ ctx, kind, record, initialLotRef }: SheetEditorProps) {
   const router = useRouter();
   const sheet = record?.content ?? null;
   const who = ctx.identity;
@@ -47,7 +49,7 @@ export function SheetEditor({ ctx, kind, record }: SheetEditorProps) {
   const edition = useMemo(() => editionFromCache(cached?.edition), [cached]);
   const values = useMemo(() => makeValueSource(edition, sheet ? { problem: sheet.problem, inputs: sheet.inputs } : null), [edition, sheet]);
   const suggestions = useMemo(() => saltSuggestions(edition?.values ?? []), [edition]);
-  const [meta, setMeta] = useState<Meta>({ title: sheet?.title ?? '', lotRef: sheet?.lotRef ?? '', areaId: sheet?.areaId ?? '', note: sheet?.note ?? '' });
+  const [meta, setMeta] = useState<Meta>({ title: sheet?.title ?? '', lotRef: sheet ? (sheet.lotRef ?? '') : (initialLotRef ?? ''), areaId: sheet?.areaId ?? '', note: sheet?.note ?? '' });
   const [form, setForm] = useState<AnyForm>(() => formOf(kind, sheet));
   const [message, setMessage] = useState<{ tone: 'ok' | 'error'; text: string } | null>(null);
   const [metaErrors, setMetaErrors] = useState<Record<string, string>>({});

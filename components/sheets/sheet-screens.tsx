@@ -17,6 +17,8 @@ export function NewSheetScreen({ ctx }: { ctx: WorkbenchContext }) {
   const { ready } = useWorkbenchStore(ctx.identity);
   const asked = params.get('kind') ?? 'cycle';
   const kind: SheetKind | null = (SHEET_KINDS as readonly string[]).includes(asked) ? (asked as SheetKind) : null;
+  // The bench log starts a calorimetry sheet for its lot: `/sheets/new?kind=calorimetry&lot=…`.
+  const lot = (params.get('lot') ?? '').trim().slice(0, 80);
   if (!kind) {
     return (
       <p role="alert" className="panel">
@@ -26,7 +28,7 @@ export function NewSheetScreen({ ctx }: { ctx: WorkbenchContext }) {
     );
   }
   if (!ready) return <p className="text-sm text-ink-soft">Opening this device’s store…</p>;
-  return <SheetEditor key={kind} ctx={ctx} kind={kind} record={null} />;
+  return <SheetEditor key={`${kind}:${lot}`} ctx={ctx} kind={kind} record={null} initialLotRef={lot} />;
 }
 
 export function OpenSheetScreen({ ctx }: { ctx: WorkbenchContext }) {
