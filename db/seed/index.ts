@@ -4,6 +4,7 @@ import { DEMO_AREAS, DEMO_PASSWORD, DEMO_SITE, DEMO_USERS } from './demo-site';
 import { ensureArea, ensureSite, ensureUser } from './ensure-site';
 import { seedEditions } from './editions';
 import { seedBenchEntries } from './bench';
+import { seedDemoSheets } from './sheets';
 import { seedDemoConflict } from '@/db/access/sync-demo-conflict';
 
 try {
@@ -14,6 +15,7 @@ try {
   console.log(`demo site ${site.created ? 'created' : 'already present'}; ${created} new demo accounts`);
   console.log(`reference editions ${(await seedEditions(site.id)).created ? 'seeded (No. 1 retired, No. 2 in force)' : 'already present: left as they are'}`);
   console.log(`demo bench entries: ${await seedBenchEntries(site.id)} added`);
+  console.log(`demo sheets: ${await seedDemoSheets(site.id)} added`);
   console.log(`demo conflict for the supervisor: ${(await seedDemoConflict(site.id)) ? 'added' : 'already present'}`);
 } catch (error) {
   console.error('seeding failed:', error);

@@ -105,6 +105,11 @@ test('a note with a photo made offline syncs and appears, photo and all, on anot
   await expect(tablet.getByRole('region', { name: `Lot ${lot}` })).toBeVisible();
   await tablet.getByLabel('Search the bench log').fill(`${lot} nothing-of-the-kind`);
   await expect(tablet.getByRole('region', { name: `Lot ${lot}` })).toHaveCount(0);
+  // The lot's "Start calorimetry sheet" opens a new calorimetry sheet with the lot filled in.
+  await tablet.goto(`/bench?lot=${encodeURIComponent(lot)}`);
+  await tablet.getByRole('link', { name: `Start calorimetry sheet for lot ${lot}` }).click();
+  await expect(tablet).toHaveURL(/\/sheets\/new\?kind=calorimetry&lot=/);
+  await expect(tablet.getByLabel('Lot or batch reference')).toHaveValue(lot);
   await other.close();
 });
 
