@@ -3,7 +3,6 @@
 // and lot, sort; open, duplicate, delete (a tombstone). Reads the local store, online or offline.
 import {
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getSortedRowModel,
@@ -14,6 +13,7 @@ import {
 import Link from 'next/link';
 import { useEffect, useMemo, useState } from 'react';
 import { warmOfflinePages } from '@/components/pwa/sw-messages';
+import { DataTable } from '@/components/ui/data-table';
 import { deleteSheet, newSheet, saveSheet, syncNow, useSheets, type LocalRecord, type Sheet } from '@/lib/local';
 import { SHEET_KINDS, SHEET_STATUSES } from '@/lib/sheets/sheet-schema';
 import { mayEdit, KIND_TEXT, STATUS_TEXT } from '@/lib/workbench/sheet-rules';
@@ -207,41 +207,7 @@ export function SheetsList({ ctx }: SheetsListProps) {
         </label>
       </div>
       <div className="panel overflow-x-auto p-0">
-        <table className="w-full min-w-[44rem] border-collapse text-sm">
-          <caption className="sr-only">Sheets on this device</caption>
-          <thead>
-            {table.getHeaderGroups().map((g) => (
-              <tr key={g.id} className="border-b border-rule text-left text-ink-soft">
-                {g.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" className="px-3 py-2 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" className="inline-flex min-h-touch items-center gap-1 font-medium" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === 'asc' ? '↑' : sorted === 'desc' ? '↓' : '↕'}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((r) => (
-              <tr key={r.id} className="border-b border-rule align-top last:border-0">
-                {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className="px-3 py-1">
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <DataTable table={table} caption="Sheets on this device" className="w-full min-w-[44rem] border-collapse text-left text-sm" headCellClassName="px-3 py-2" cellClassName="px-3 py-1" />
         {records === undefined || !ready ? <p className="p-4 text-sm text-ink-soft">Loading the sheets on this device…</p> : rows.length === 0 ? <p className="p-4 text-sm text-ink-soft">No sheets yet. Start one above.</p> : table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-ink-soft">No sheet matches the search and filters.</p> : null}
       </div>
     </div>

@@ -7,13 +7,16 @@ export interface DataTableProps<T> {
   /** Accessible name of the table (read by screen readers, hidden on screen). */
   caption: string;
   className?: string;
+  /** Padding of header and body cells. */
+  headCellClassName?: string;
+  cellClassName?: string;
 }
 
 /**
  * Renders a TanStack table: sortable columns get a header button (≥ 44 px) that says its order in
  * text as well as by arrow, and `aria-sort` for assistive technology.
  */
-export function DataTable<T>({ table, caption, className = 'w-full text-left text-sm' }: DataTableProps<T>) {
+export function DataTable<T>({ table, caption, className = 'w-full text-left text-sm', headCellClassName = 'py-2 pr-3', cellClassName = 'py-2 pr-3' }: DataTableProps<T>) {
   return (
     <div className="overflow-x-auto">
       <table className={className}>
@@ -24,7 +27,7 @@ export function DataTable<T>({ table, caption, className = 'w-full text-left tex
               {hg.headers.map((h) => {
                 const sorted = h.column.getIsSorted();
                 return (
-                  <th key={h.id} scope="col" className="py-2 pr-3 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                  <th key={h.id} scope="col" className={`${headCellClassName} font-medium`} aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
                     {h.column.getCanSort() ? (
                       <button type="button" className="inline-flex min-h-touch items-center gap-1 font-medium" onClick={h.column.getToggleSortingHandler()}>
                         {flexRender(h.column.columnDef.header, h.getContext())}
@@ -43,7 +46,7 @@ export function DataTable<T>({ table, caption, className = 'w-full text-left tex
           {table.getRowModel().rows.map((r) => (
             <tr key={r.id} className="border-b border-rule/60 align-top">
               {r.getVisibleCells().map((c) => (
-                <td key={c.id} className="py-2 pr-3">
+                <td key={c.id} className={cellClassName}>
                   {flexRender(c.column.columnDef.cell, c.getContext())}
                 </td>
               ))}
