@@ -1,18 +1,8 @@
 // Client-side calls and types of the reconcile endpoints (GET /api/v1/conflicts…, POST …/resolve).
 import { getJson, postJson } from '@/components/ui/post-json';
+import type { ConflictSummary } from '@/lib/sync/conflict-summary';
 
-export interface ConflictSummary {
-  id: string;
-  kind: 'edit' | 'drift';
-  status: 'open' | 'resolved';
-  entity: 'sheet' | 'bench_entry' | 'photo';
-  recordId: string;
-  title: string;
-  sheetKind: string | null;
-  createdAt: string;
-  authors: { id: string; name: string }[];
-  versionCount: number;
-}
+export type { ConflictSummary };
 
 export interface ConflictDetail extends ConflictSummary {
   server: { revision: number; content: Record<string, unknown>; serverResult: unknown };

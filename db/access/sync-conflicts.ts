@@ -9,6 +9,7 @@ import { audit } from '@/lib/server/audit';
 import { AppError } from '@/lib/server/errors';
 import { SHEET_MERGE_FIELDS, type Sheet } from '@/lib/sheets/sheet-schema';
 import { diffFields, mergeFieldByField, type FieldDifference } from '@/lib/sync/field-diff';
+import type { ConflictSummary } from '@/lib/sync/conflict-summary';
 import { ENTITY_SCHEMAS, type Entity, type ResolveConflict } from '@/lib/sync/protocol';
 import { EditionContext, resolveWithEdition, solveSheet, type DriftInfo } from './sync-drift';
 import { insertChanges, loadRecords, toServerRecord, upsertRecords } from './sync-records';
@@ -25,18 +26,7 @@ export const conflictListQuerySchema = z.object({
 });
 export type ConflictListQuery = z.infer<typeof conflictListQuerySchema>;
 
-export interface ConflictSummary {
-  id: string;
-  kind: 'edit' | 'drift';
-  status: 'open' | 'resolved';
-  entity: Entity;
-  recordId: string;
-  title: string;
-  sheetKind: string | null;
-  createdAt: string;
-  authors: { id: string; name: string }[];
-  versionCount: number;
-}
+export type { ConflictSummary } from '@/lib/sync/conflict-summary';
 
 const parse = (v: unknown) => (typeof v === 'string' ? (JSON.parse(v) as unknown) : v);
 const MERGE_FIELDS: Record<Entity, readonly string[]> = { sheet: SHEET_MERGE_FIELDS, bench_entry: BENCH_MERGE_FIELDS, photo: [] };
