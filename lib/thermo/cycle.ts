@@ -218,38 +218,24 @@ function cycleLayout(salt: BinarySalt, basis: EnergyBasis): CycleLayout {
   if (DIATOMIC_GAS.has(X)) {
     pathSpecs = [dissociationSpec];
     pathRoute = 'bond_dissociation';
-  } else if (X === 'Br') {
+  } else if (X === 'Br' || X === 'I') {
+    // Br2 is a liquid and I2 a solid at 298 K: first to the gas, then dissociate.
+    const [kind, phase, verb] = X === 'Br' ? (['enthalpy_of_vaporization', 'l', 'vaporization'] as const) : (['enthalpy_of_sublimation', 'cr', 'sublimation'] as const);
     pathSpecs = [
       {
-        key: `enthalpy_of_vaporization:${X2}`,
-        kind: 'enthalpy_of_vaporization',
-        name: `Enthalpy of vaporization of ${X2}`,
-        property: 'enthalpy_of_vaporization',
+        key: `${kind}:${X2}`,
+        kind,
+        name: `Enthalpy of ${verb} of ${X2}`,
+        property: kind,
         species: X2,
-        phase: 'l',
-        process: `${X2}(l) → ${X2}(g)`,
+        phase,
+        process: `${X2}(${phase}) → ${X2}(g)`,
         coefficient: b.times(half),
         basisCorrection: zero,
       },
       dissociationSpec,
     ];
-    pathRoute = 'vaporization_then_dissociation';
-  } else if (X === 'I') {
-    pathSpecs = [
-      {
-        key: `enthalpy_of_sublimation:${X2}`,
-        kind: 'enthalpy_of_sublimation',
-        name: `Enthalpy of sublimation of ${X2}`,
-        property: 'enthalpy_of_sublimation',
-        species: X2,
-        phase: 'cr',
-        process: `${X2}(cr) → ${X2}(g)`,
-        coefficient: b.times(half),
-        basisCorrection: zero,
-      },
-      dissociationSpec,
-    ];
-    pathRoute = 'sublimation_then_dissociation';
+    pathRoute = X === 'Br' ? 'vaporization_then_dissociation' : 'sublimation_then_dissociation';
   } else {
     pathSpecs = [];
     pathRoute = 'atomization';
