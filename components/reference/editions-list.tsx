@@ -94,36 +94,38 @@ export function EditionsList() {
         }}
       >
         <h2 className="sm:col-span-3">Compare two editions</h2>
-        <div>
-          <label htmlFor="compare-from" className="field-label">
-            From
-          </label>
-          <select id="compare-from" className="field-input" value={from} onChange={(e) => setFrom(e.target.value)} required>
-            <option value="">Choose an edition</option>
-            {editions.map((e) => (
-              <option key={e.id} value={e.id}>
-                No. {e.number} ({e.state.replace('_', ' ')})
-              </option>
-            ))}
-          </select>
-        </div>
-        <div>
-          <label htmlFor="compare-to" className="field-label">
-            To
-          </label>
-          <select id="compare-to" className="field-input" value={to} onChange={(e) => setTo(e.target.value)} required>
-            <option value="">Choose an edition</option>
-            {editions.map((e) => (
-              <option key={e.id} value={e.id}>
-                No. {e.number} ({e.state.replace('_', ' ')})
-              </option>
-            ))}
-          </select>
-        </div>
+        <EditionSelect id="compare-from" label="From" editions={editions} value={from} onChange={setFrom} />
+        <EditionSelect id="compare-to" label="To" editions={editions} value={to} onChange={setTo} />
         <button type="submit" className="btn-quiet" disabled={!from || !to}>
           Compare
         </button>
       </form>
+    </div>
+  );
+}
+
+interface EditionSelectProps {
+  id: string;
+  label: string;
+  editions: EditionInfo[];
+  value: string;
+  onChange: (id: string) => void;
+}
+
+function EditionSelect({ id, label, editions, value, onChange }: EditionSelectProps) {
+  return (
+    <div>
+      <label htmlFor={id} className="field-label">
+        {label}
+      </label>
+      <select id={id} className="field-input" value={value} onChange={(e) => onChange(e.target.value)} required>
+        <option value="">Choose an edition</option>
+        {editions.map((e) => (
+          <option key={e.id} value={e.id}>
+            No. {e.number} ({e.state.replace('_', ' ')})
+          </option>
+        ))}
+      </select>
     </div>
   );
 }
