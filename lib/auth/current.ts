@@ -8,6 +8,7 @@ import { db } from '@/db/client';
 import { users } from '@/db/schema';
 import { env, isSecureUrl } from '@/lib/env';
 import type { Actor } from '@/lib/server/actor';
+import { rememberedDecode } from './remembered-decode';
 import { can, type Permission } from './permissions';
 
 export type UserActor = Extract<Actor, { kind: 'user' }>;
@@ -29,6 +30,7 @@ export const currentUser = cache(async (): Promise<UserActor | null> => {
     req: { cookies: store, headers: {} } as unknown as Parameters<typeof getToken>[0]['req'],
     secret: env().AUTH_SECRET,
     secureCookie: isSecureUrl(),
+    decode: rememberedDecode,
   });
   const id = typeof token?.uid === 'string' ? token.uid : '';
   if (!token || !id) return null;
