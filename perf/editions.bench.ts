@@ -1,8 +1,12 @@
 // Benchmark: GET /api/v1/editions/current with a 5,000-value edition, over real HTTP.
 // Usage: BASE_URL=http://127.0.0.1:3000 DATABASE_URL=mysql://… tsx perf/editions.bench.ts
-// Creates a throwaway site with an edition in force, measures the 200 path (p50/p95 time to last
-// byte on loopback, which bounds the server time from above) and the 304 path, prints the gzipped
-// payload size and the ratio of each figure to its target, then removes the site.
+// Creates a throwaway site with an edition in force, measures the 200 path and the 304 path, prints
+// the gzipped payload size and the ratio of each figure to its target, then removes the site.
+// Server time (what the targets are about) is read from the served build's own clock when `npm run
+// perf` preloads perf/server-clock.mjs into it (RUNGBOOK_SERVER_CLOCK names its file); the round trip
+// the client sees (time to last byte on loopback, an upper bound) is printed beside it, and is the
+// figure compared with the target when no server clock is available.
+import { existsSync, readFileSync, statSync } from 'node:fs';
 import http from 'node:http';
 import { performance } from 'node:perf_hooks';
 import { v7 } from 'uuid';
@@ -95,6 +99,24 @@ function get(path: string, headers: Record<string, string>): Promise<{ status: n
 }
 const keepAlive = new http.Agent({ keepAlive: true, maxSockets: 1 });
 
+/** The served build's own request clock (perf/server-clock.mjs), if this run has one. */
+const CLOCK = process.env.RUNGBOOK_SERVER_CLOCK;
+const settle = () => new Promise((r) => setTimeout(r, 700)); // the clock writes its lines at least every 250 ms
+async function clockMark(): Promise<number> {
+  if (!CLOCK) return 0;
+  await settle();
+  return existsSync(CLOCK) ? statSync(CLOCK).size : 0;
+}
+async function serverTimes(since: number, path: string, status: number): Promise<number[]> {
+  if (!CLOCK) return [];
+  await settle();
+  if (!existsSync(CLOCK)) return [];
+  return readFileSync(CLOCK).subarray(since).toString('utf8').split('\n')
+    .map((line) => line.split('\t'))
+    .filter((f) => f.length === 4 && f[1] === path && Number(f[2]) === status)
+    .map((f) => Number(f[3]));
+}
+
 function pct(list: number[], p: number) {
   const s = [...list].sort((a, b) => a - b);
   return s[Math.min(s.length - 1, Math.ceil((p / 100) * s.length) - 1)]!;
@@ -116,6 +138,7 @@ try {
   const t200: number[] = [];
   const h200: number[] = [];
   let gz = 0;
+  const mark200 = await clockMark();
   for (let i = 0; i < RUNS_200; i++) {
     const r = await get('/api/v1/editions/current', base);
     if (r.status !== 200) throw new Error(`expected 200, got ${r.status}`);
@@ -123,8 +146,10 @@ try {
     h200.push(r.handlerMs);
     gz = r.bytes;
   }
+  const s200 = await serverTimes(mark200, '/api/v1/editions/current', 200);
   const raw = await get('/api/v1/editions/current', { cookie });
   const t304: number[] = [];
+  const mark304 = await clockMark();
   const h304: number[] = [];
   for (let i = 0; i < RUNS_304; i++) {
     const r = await get('/api/v1/editions/current', { ...base, 'if-none-match': etag });
@@ -132,20 +157,31 @@ try {
     t304.push(r.ms);
     h304.push(r.handlerMs);
   }
+  const s304 = await serverTimes(mark304, '/api/v1/editions/current', 304);
   // The floor under any signed-in request: GET /api/v1/me does the same session check and one read.
   const tMe: number[] = [];
+  const markMe = await clockMark();
   for (let i = 0; i < RUNS_304; i++) tMe.push((await get('/api/v1/me', { cookie })).ms);
-  const p95_200 = pct(t200, 95);
-  const p95_304 = pct(t304, 95);
+  const sMe = await serverTimes(markMe, '/api/v1/me', 200);
   const f = (n: number) => n.toFixed(2);
+  const haveClock = s200.length === RUNS_200 && s304.length === RUNS_304;
+  const line = (label: string, server: number[], trip: number[], target: number) => {
+    const judged = haveClock ? server : trip;
+    const p95 = pct(judged, 95);
+    const verdict = `target p95 ≤ ${target} ms (${haveClock ? 'server time' : 'round trip: no server clock in this run'}), ratio ${(p95 / target).toFixed(2)} — ${p95 <= target ? 'met' : 'MISSED'}`;
+    console.log(`  ${label}`);
+    if (haveClock) console.log(`    server time:  p50 ${f(pct(server, 50))} ms, p95 ${f(pct(server, 95))} ms, p99 ${f(pct(server, 99))} ms, max ${f(Math.max(...server))} ms`);
+    console.log(`    round trip:   p50 ${f(pct(trip, 50))} ms, p95 ${f(pct(trip, 95))} ms, p99 ${f(pct(trip, 99))} ms, max ${f(Math.max(...trip))} ms`);
+    console.log(`    ${verdict}`);
+  };
   console.log(`GET /api/v1/editions/current — ${VALUES} values, ${BASE_URL}`);
   console.log(`  first request (cold body): ${f(cold.ms)} ms`);
-  console.log(`  200 path, ${RUNS_200} runs: p50 ${f(pct(t200, 50))} ms, p95 ${f(p95_200)} ms, max ${f(Math.max(...t200))} ms — target p95 ≤ ${TARGET_200_P95_MS} ms, ratio ${(p95_200 / TARGET_200_P95_MS).toFixed(2)}`);
-  console.log(`  304 path, ${RUNS_304} runs: p50 ${f(pct(t304, 50))} ms, p95 ${f(p95_304)} ms, max ${f(Math.max(...t304))} ms — target p95 ≤ ${TARGET_304_P95_MS} ms, ratio ${(p95_304 / TARGET_304_P95_MS).toFixed(2)}`);
-  console.log(`  for scale, GET /api/v1/me (session check + one read): p50 ${f(pct(tMe, 50))} ms, p95 ${f(pct(tMe, 95))} ms`);
+  line(`200 path, ${RUNS_200} runs:`, s200, t200, TARGET_200_P95_MS);
+  line(`304 path, ${RUNS_304} runs:`, s304, t304, TARGET_304_P95_MS);
+  console.log(`  for scale, GET /api/v1/me (session check + one read): ${sMe.length ? `server p50 ${f(pct(sMe, 50))} ms, p95 ${f(pct(sMe, 95))} ms; ` : ''}round trip p50 ${f(pct(tMe, 50))} ms, p95 ${f(pct(tMe, 95))} ms`);
   console.log(`  handler's own time (Server-Timing, after the sign-in check, before compression): 200 p95 ${f(pct(h200, 95))} ms, 304 p95 ${f(pct(h304, 95))} ms`);
   console.log(`  payload: ${(gz / 1024).toFixed(1)} KiB gzipped, ${(raw.bytes / 1024).toFixed(1)} KiB uncompressed (${(raw.bytes / gz).toFixed(1)}×)`);
-  console.log('  (times are request-to-last-byte over loopback with keep-alive: an upper bound on server time)');
+  console.log('  (server time: Node has parsed the request head → the last byte is handed to the socket, in the served process; round trip: request to last byte over loopback with keep-alive, client included)');
 } finally {
   await cleanup(site.siteId);
   await closeDb();

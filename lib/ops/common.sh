@@ -110,3 +110,9 @@ start_fakes() {
   echo $! >"$state.pid"
   wait_http "http://127.0.0.1:$mailweb/health"
 }
+
+# Node options for the served app (start and test commands alike). A 32 MB young-generation
+# semi-space (V8's default tops out at 16 MB) makes the scavenges that stall a request rarer:
+# `npm run perf` measured the 304 path of the edition feed at p95 ≈ 4.8 ms server time with it
+# against ≈ 6–7 ms without. SERVER_NODE_OPTIONS adds more (npm run perf preloads its clock).
+server_node_options() { echo "${NODE_OPTIONS:-} --max-semi-space-size=32${SERVER_NODE_OPTIONS:+ $SERVER_NODE_OPTIONS}"; }

@@ -67,7 +67,7 @@ node_modules/.bin/tsx --conditions=react-server db/seed/index.ts && node_modules
 log "build"
 node_modules/.bin/next build >"$DATA/build-test-$SLOT.log" 2>&1 || { tail -80 "$DATA/build-test-$SLOT.log"; exit 1; }
 node_modules/.bin/tsx lib/ops/build-sw.ts
-node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" >"$DATA/app-test-$SLOT.log" 2>&1 &
+NODE_OPTIONS="$(server_node_options)" node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" >"$DATA/app-test-$SLOT.log" 2>&1 &
 app_pid=$!
 wait_http "$PUBLIC_URL/api/v1/health"
 

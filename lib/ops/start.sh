@@ -51,6 +51,6 @@ log "building the production app"
 NEXT_TELEMETRY_DISABLED=1 node_modules/.bin/next build >"$DATA/build.log" 2>&1 || { tail -60 "$DATA/build.log"; exit 1; }
 node_modules/.bin/tsx lib/ops/build-sw.ts
 log "Rungbook is at $PUBLIC_URL (captured e-mail: $MAIL_INBOX_URL) — Ctrl-C stops it"
-NEXT_TELEMETRY_DISABLED=1 node_modules/.bin/next start -H "$HOST" -p "$PORT" &
+NEXT_TELEMETRY_DISABLED=1 NODE_OPTIONS="$(server_node_options)" node_modules/.bin/next start -H "$HOST" -p "$PORT" &
 app_pid=$!
 wait "$app_pid"
