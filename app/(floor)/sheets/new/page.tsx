@@ -1,5 +1,5 @@
 import { Suspense } from 'react';
-import { NewSheetScreen } from '@/components/sheets/sheet-screens';
+import { NewSheetScreen } from '@/components/sheets/new-sheet-screen';
 import { loadSheetsContext } from '../sheets-context';
 
 export const metadata = { title: 'New sheet' };

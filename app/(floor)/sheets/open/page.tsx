@@ -1,5 +1,5 @@
 import { Suspense } from 'react';
-import { OpenSheetScreen } from '@/components/sheets/sheet-screens';
+import { OpenSheetScreen } from '@/components/sheets/open-sheet-screen';
 import { loadSheetsContext } from '../sheets-context';
 
 export const metadata = { title: 'Sheet' };
