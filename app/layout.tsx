@@ -1,6 +1,5 @@
 import type { Metadata, Viewport } from 'next';
 import localFont from 'next/font/local';
-import { Providers } from '@/components/providers';
 import { PwaStatus } from '@/components/pwa/pwa-status';
 import './globals.css';
 
@@ -29,7 +28,7 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
   return (
     <html lang="en" className={body.variable}>
       <body className="min-h-screen font-sans">
-        <Providers>{children}</Providers>
+        {children}
         <PwaStatus />
       </body>
     </html>
