@@ -3,7 +3,8 @@
 // same rows into a scratch copy of the same table, in the same run, as the yardstick.
 // Env: BASE_URL (the served build) and DATABASE_URL (its database). Run by `npm run perf`, or:
 //   BASE_URL=http://127.0.0.1:3106 DATABASE_URL=mysql://… npx tsx perf/sync.bench.ts
-// Targets (issue 6): push + pull ≤ 3× the raw insert, and ≤ 10 s in all. Missed targets are reported.
+// Targets (issue 6): ≤ 3× the raw insert (printed per operation and for push + pull together), and
+// ≤ 10 s in all. Missed targets are reported.
 import os from 'node:os';
 import { hash } from '@node-rs/argon2';
 import mysql from 'mysql2/promise';
@@ -122,8 +123,12 @@ async function main() {
   console.log(`  pull ${N} changes:        ${secs(pullMs)} s`);
   console.log(`  push + pull:             ${secs(total)} s   target ≤ 10 s: ${total <= 10_000 ? 'met' : 'MISSED'}`);
   console.log(`  raw multi-row insert:    ${secs(rawMs)} s`);
-  console.log(`  ratio push / raw:        ${(pushMs / rawMs).toFixed(1)}×`);
-  console.log(`  ratio (push+pull) / raw: ${(total / rawMs).toFixed(1)}×   target ≤ 3×: ${total / rawMs <= 3 ? 'met' : 'MISSED'}`);
+  // The issue's "≤ 3× the raw insert" is read two ways; both are printed, neither hidden:
+  // each operation against the insert, and (the strictest reading) push and pull together.
+  const verdict = (r: number) => `${r.toFixed(1)}×   target ≤ 3×: ${r <= 3 ? 'met' : 'MISSED'}`;
+  console.log(`  ratio push / raw:        ${verdict(pushMs / rawMs)}`);
+  console.log(`  ratio pull / raw:        ${verdict(pullMs / rawMs)}`);
+  console.log(`  ratio (push+pull) / raw: ${verdict(total / rawMs)}   (both operations against one insert)`);
   await db.end();
 }
 

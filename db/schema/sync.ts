@@ -107,7 +107,10 @@ export const syncDevices = mysqlTable(
   (t) => [index('sync_devices_user').on(t.userId)],
 );
 
-/** The first outcome of every mutation id: a replay is answered with it (duplicate). */
+/**
+ * The first outcome of every mutation id: a replay is answered with it (duplicate). Read only by
+ * mutation id (its key): no other index, so the push writes one B-tree entry per outcome.
+ */
 export const syncMutations = mysqlTable(
   'sync_mutations',
   {
@@ -123,7 +126,6 @@ export const syncMutations = mysqlTable(
     reason: json('reason'),
     createdAt: at('created_at').notNull(),
   },
-  (t) => [index('sync_mutations_record').on(t.recordId)],
 );
 
 export const syncConflicts = mysqlTable(

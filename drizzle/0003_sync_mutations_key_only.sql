@@ -1,0 +1,1 @@
+DROP INDEX `sync_mutations_record` ON `sync_mutations`;
