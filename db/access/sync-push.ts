@@ -43,6 +43,8 @@ interface BatchState {
   writes: Map<string, RecordRow>;
   changes: ChangeRow[];
   mutationRows: unknown[][];
+  /** Mutations whose change-log row (cause 'mutation') is pending: that row is their outcome. */
+  logged: Set<string>;
   conflictRows: unknown[][];
   versionRows: unknown[][];
   audits: { action: string; entityType: string; entityId: string; before?: unknown; after?: unknown }[];
@@ -104,18 +106,32 @@ function isDataError(error: unknown) {
 }
 const isTransient = isTransientDbError;
 
+/** Device → user bindings seen by this process (a binding never changes once written), with when its last-seen time was written. */
+const knownDevices = new Map<string, { userId: string; seenAt: number }>();
+const KNOWN_DEVICES_MAX = 10_000;
+
 async function registerDevice(actor: UserActor, deviceId: string) {
   const now = new Date();
+  const known = knownDevices.get(deviceId);
+  if (known && known.userId !== actor.userId) throw new AppError('forbidden', DEVICE_TAKEN);
+  if (known && now.getTime() - known.seenAt <= 60_000) return;
   const owner = async () => ((await pool().query('SELECT user_id, last_seen_at FROM sync_devices WHERE id = ?', [deviceId]))[0] as { user_id: string; last_seen_at: Date }[])[0];
   let row = await owner();
   if (!row) {
     await pool().query('INSERT IGNORE INTO sync_devices (id, user_id, site_id, created_at, last_seen_at) VALUES (?, ?, ?, ?, ?)', [deviceId, actor.userId, actor.siteId, now, now]);
     row = await owner();
   }
-  if (row?.user_id !== actor.userId) throw new AppError('forbidden', "This device belongs to another user's local store; a push naming another user's device is refused.");
+  if (row?.user_id !== actor.userId) throw new AppError('forbidden', DEVICE_TAKEN);
   // Last seen, to the minute (no write on every push).
-  if (now.getTime() - new Date(row.last_seen_at).getTime() > 60_000) await pool().query('UPDATE sync_devices SET last_seen_at = ? WHERE id = ?', [now, deviceId]);
+  let seenAt = new Date(row.last_seen_at).getTime();
+  if (now.getTime() - seenAt > 60_000) {
+    await pool().query('UPDATE sync_devices SET last_seen_at = ? WHERE id = ?', [now, deviceId]);
+    seenAt = now.getTime();
+  }
+  if (knownDevices.size >= KNOWN_DEVICES_MAX) knownDevices.delete(knownDevices.keys().next().value!);
+  knownDevices.set(deviceId, { userId: row.user_id, seenAt });
 }
+const DEVICE_TAKEN = "This device belongs to another user's local store; a push naming another user's device is refused.";
 
 async function loadAreaIds(siteId: string): Promise<Set<string>> {
   const [rows] = await pool().query('SELECT id FROM areas WHERE site_id = ?', [siteId]);
@@ -136,7 +152,7 @@ async function runBatch(
   // waits here and then sees the first one's outcomes (duplicate), never a half state.
   const seq = await SiteSequence.lock(conn, actor.siteId);
   const ids = req.mutations.map((m) => m.mutationId);
-  const [prior] = await conn.query('SELECT mutation_id, site_id, user_id, entity, record_id, status, revision, conflict_id, reason FROM sync_mutations WHERE mutation_id IN (?)', [ids.length ? ids : ['']]);
+  const [prior] = await conn.query(PRIOR_OUTCOMES_SQL, [ids.length ? ids : [''], ids.length ? ids : ['']]);
   const priorById = new Map((prior as Record<string, unknown>[]).map((r) => [String(r.mutation_id), r]));
 
   const records = new Map<string, RecordRow>();
@@ -153,7 +169,7 @@ async function runBatch(
     for (const [id, row] of await loadRecords(conn, entity, [...wanted], true)) records.set(`${entity}:${id}`, row);
   }
 
-  const st: BatchState = { conn, seq, records, writes: new Map(), changes: [], mutationRows: [], conflictRows: [], versionRows: [], audits: [], openedConflicts: 0, deviceId: req.deviceId };
+  const st: BatchState = { conn, seq, records, writes: new Map(), changes: [], mutationRows: [], logged: new Set(), conflictRows: [], versionRows: [], audits: [], openedConflicts: 0, deviceId: req.deviceId };
   const out: MutationOutcome[] = [];
   const inBatch = new Map<string, MutationOutcome>();
 
@@ -205,8 +221,19 @@ async function runBatch(
   });
 }
 
+/**
+ * Earlier outcomes of these mutation ids (design.md §4: a replay gets the first outcome). An applied
+ * mutation that changed its record is answered from its change-log row (the row the pull reads,
+ * committed in the same transaction as the record); every other outcome (a conflict, a rejection,
+ * an applied no-op) has its own row in sync_mutations.
+ */
+const PRIOR_OUTCOMES_SQL = `SELECT mutation_id, site_id, user_id, entity, record_id, status, revision, conflict_id, reason FROM sync_mutations WHERE mutation_id IN (?)
+  UNION ALL
+  SELECT mutation_id, site_id, actor_user_id, entity, record_id, 'applied', revision, NULL, NULL FROM sync_changes WHERE mutation_id IN (?) AND cause = 'mutation'`;
+
 function recordOutcome(st: BatchState, actor: UserActor, deviceId: string, m: Mutation, o: MutationOutcome, now: Date) {
   if (o.status === 'retry') return;
+  if (o.status === 'applied' && st.logged.has(m.mutationId)) return; // its change-log row is the outcome
   st.mutationRows.push([
     m.mutationId,
     actor.siteId,
@@ -228,6 +255,7 @@ function clearPending(st: BatchState) {
   st.conflictRows = [];
   st.versionRows = [];
   st.mutationRows = [];
+  st.logged.clear();
   st.audits = [];
 }
 
@@ -335,6 +363,7 @@ async function decideOne(st: BatchState, actor: UserActor, p: Prepared, drift: D
   st.records.set(key, row);
   st.writes.set(key, row);
   st.changes.push({ seq: seqNo, entity: m.entity, recordId: m.recordId, revision: row.revision, cause: 'mutation', mutationId: m.mutationId, actorUserId: actor.userId });
+  st.logged.add(m.mutationId);
 
   // Edition drift: checked only when the pin is new or changed.
   const prevPin = (existing?.content as Sheet | undefined)?.pinnedEditionId;

@@ -91,7 +91,9 @@ export const syncChanges = mysqlTable(
     actorUserId: ref('actor_user_id'),
     createdAt: at('created_at').notNull(),
   },
-  (t) => [primaryKey({ columns: [t.siteId, t.seq] })],
+  // A mutation that changed its record has no outcome row of its own: its change-log row (cause
+  // 'mutation') is the outcome, found by mutation id when the device replays it.
+  (t) => [primaryKey({ columns: [t.siteId, t.seq] }), index('sync_changes_mutation').on(t.mutationId)],
 );
 
 /** Devices, each bound to the user who first pushed from it. */
@@ -108,8 +110,8 @@ export const syncDevices = mysqlTable(
 );
 
 /**
- * The first outcome of every mutation id: a replay is answered with it (duplicate). Read only by
- * mutation id (its key): no other index, so the push writes one B-tree entry per outcome.
+ * The first outcome of a mutation id, where it is not a change-log row (a conflict, a rejection, an
+ * applied no-op): a replay is answered with it (duplicate). Read only by mutation id, its key.
  */
 export const syncMutations = mysqlTable(
   'sync_mutations',

@@ -7,7 +7,7 @@ import fc from 'fast-check';
 import { v7 } from 'uuid';
 import { afterAll, beforeAll, expect, it } from 'vitest';
 import { signedIn, type Client } from '../support/http';
-import { closeDb, makeSite, query } from '../support/db';
+import { closeDb, makeSite, outcomesOf, query } from '../support/db';
 import { sameJson } from '@/lib/sync/canonical-json';
 import type { QueuedMutation } from '@/lib/sync/local-state';
 import type { PullResponse, PushResponse } from '@/lib/sync/protocol';
@@ -103,7 +103,7 @@ it('three devices over a lossy network converge with the server after draining a
         'SELECT c.record_id, v.content FROM sync_conflict_versions v JOIN sync_conflicts c ON c.id = v.conflict_id WHERE c.record_id IN (?, ?)',
         recordIds,
       );
-      const applied = await query<{ mutation_id: string; record_id: string }>("SELECT mutation_id, record_id FROM sync_mutations WHERE status = 'applied' AND record_id IN (?, ?)", recordIds);
+      const applied = (await outcomesOf(recordIds)).filter((o) => o.status === 'applied');
       for (const d of devices) {
         expect(d.outbox.size, `${d.name} drained`).toBe(0);
         expect(d.rejected).toEqual([]);

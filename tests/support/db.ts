@@ -17,6 +17,20 @@ export async function query<T = Record<string, unknown>>(sql: string, params: un
   return rows as T[];
 }
 
+/**
+ * The stored outcomes of the mutations on these records, wherever the server keeps them: an applied
+ * mutation that changed its record is its change-log row (cause 'mutation'); every other outcome is
+ * a row of sync_mutations. One row per mutation id.
+ */
+export async function outcomesOf(recordIds: string[]): Promise<{ mutation_id: string; record_id: string; status: string; revision: number | null }[]> {
+  return query(
+    `SELECT mutation_id, record_id, status, revision FROM sync_mutations WHERE record_id IN (?)
+     UNION ALL
+     SELECT mutation_id, record_id, 'applied', revision FROM sync_changes WHERE record_id IN (?) AND cause = 'mutation'`,
+    [recordIds, recordIds],
+  );
+}
+
 /** A fresh site with one user per role; e-mails are unique per call. Password: `password`. */
 export async function makeSite(label: string, password = 'a-test-password') {
   const siteId = v7();

@@ -1,0 +1,1 @@
+CREATE INDEX `sync_changes_mutation` ON `sync_changes` (`mutation_id`);
