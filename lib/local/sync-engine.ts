@@ -3,7 +3,8 @@
 // while online and on "sync now". Nothing waiting is ever dropped: a failed push, an expired
 // session (401) or an outdated app (426) leave the queue as it is.
 import { applyOutcome, mergePulled, type QueuedMutation } from '@/lib/sync/local-state';
-import { PROTOCOL_HEADER, SYNC_PROTOCOL, type MutationOutcome, type PullResponse, type PushResponse } from '@/lib/sync/protocol';
+import type { MutationOutcome, PullResponse, PushResponse } from '@/lib/sync/protocol';
+import { PROTOCOL_HEADER, SYNC_PROTOCOL } from '@/lib/sync/protocol-version';
 import { deviceIdOf, getActiveIdentity, getActiveStore } from './active-store';
 import { recordKey, type CachedEdition, type RungbookLocalDb } from './local-db';
 import { uploadWaitingPhotos } from './upload-photos';

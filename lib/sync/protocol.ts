@@ -4,11 +4,9 @@ import { z } from 'zod';
 import { benchEntrySchema, photoMetaSchema } from '@/lib/bench/bench-entry-schema';
 import { recordIdSchema, refIdSchema, sheetSchema } from '@/lib/sheets/sheet-schema';
 
-/** Bumped when a message changes incompatibly. Older devices get 426 and keep their queue. */
-export const SYNC_PROTOCOL = 1;
-export const MIN_SYNC_PROTOCOL = 1;
-/** Header naming the protocol a device speaks, on push and pull. */
-export const PROTOCOL_HEADER = 'x-rungbook-sync-protocol';
+// The protocol version and its header live in protocol-version.ts, without zod: the device's sync
+// engine needs them, and the messages below are classic zod (the server's route helpers take it).
+export { MIN_SYNC_PROTOCOL, PROTOCOL_HEADER, protocolProblem, SYNC_PROTOCOL } from './protocol-version';
 
 export const ENTITIES = ['sheet', 'bench_entry', 'photo'] as const;
 export type Entity = (typeof ENTITIES)[number];
@@ -101,13 +99,3 @@ export const resolveConflictSchema = z.discriminatedUnion('action', [
   z.object({ action: z.literal('resolve_in_force') }),
 ]);
 export type ResolveConflict = z.infer<typeof resolveConflictSchema>;
-
-/** Why a device's protocol header is not accepted (→ 426, the device keeps its queue), or null. */
-export function protocolProblem(header: string | null): string | null {
-  const v = header === null ? NaN : Number(header);
-  if (!Number.isInteger(v) || v < MIN_SYNC_PROTOCOL) {
-    return `This app speaks sync protocol ${header ?? '(none)'}; the server needs ${MIN_SYNC_PROTOCOL} or later. Reload to update the app — your waiting changes are kept.`;
-  }
-  if (v > SYNC_PROTOCOL) return `This app speaks sync protocol ${v}, newer than the server's ${SYNC_PROTOCOL}. Try again after the server is updated; your waiting changes are kept.`;
-  return null;
-}
