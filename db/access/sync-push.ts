@@ -332,7 +332,8 @@ async function decideOne(st: BatchState, actor: UserActor, p: Prepared, drift: D
     return { mutationId: m.mutationId, recordId: m.recordId, status: 'applied', revision: existing.revision, record: toServerRecord(existing) };
   }
 
-  const decision = decideMutation(existing ? { revision: existing.revision, awaitingReview: existing.awaitingReview } : null, m.baseRevision);
+  const ownSinceBase = existing && !existing.awaitingReview && m.baseRevision < existing.revision ? await ownChangesSince(st, actor, m) : false;
+  const decision = decideMutation(existing ? { revision: existing.revision, awaitingReview: existing.awaitingReview } : null, m.baseRevision, ownSinceBase);
   if (decision.kind === 'reject') return reject(m, decision.reason, [{ field: 'baseRevision', message: decision.reason }]);
   if (decision.kind === 'conflict') {
     const conflictId = await joinConflict(st, actor, m, existing!, p.content, 'edit', null);
@@ -362,7 +363,7 @@ async function decideOne(st: BatchState, actor: UserActor, p: Prepared, drift: D
   }
   st.records.set(key, row);
   st.writes.set(key, row);
-  st.changes.push({ seq: seqNo, entity: m.entity, recordId: m.recordId, revision: row.revision, cause: 'mutation', mutationId: m.mutationId, actorUserId: actor.userId });
+  st.changes.push({ seq: seqNo, entity: m.entity, recordId: m.recordId, revision: row.revision, cause: 'mutation', mutationId: m.mutationId, actorUserId: actor.userId, deviceId: st.deviceId });
   st.logged.add(m.mutationId);
 
   // Edition drift: checked only when the pin is new or changed.
@@ -372,6 +373,24 @@ async function decideOne(st: BatchState, actor: UserActor, p: Prepared, drift: D
     return { mutationId: m.mutationId, recordId: m.recordId, status: 'applied', revision: row.revision, record: toServerRecord(st.records.get(key)!), ...{ driftConflictId: conflictId } };
   }
   return { mutationId: m.mutationId, recordId: m.recordId, status: 'applied', revision: row.revision, record: toServerRecord(row) };
+}
+
+/**
+ * Was every change of this record after the mutation's base revision an accepted mutation of this
+ * same device and user (decideMutation's `ownSinceBase`)? Only asked when the base is behind; the
+ * record is locked FOR UPDATE, so its log cannot grow meanwhile. Changes of this batch not yet
+ * written are this device's too, unless they flag a conflict or drift.
+ */
+async function ownChangesSince(st: BatchState, actor: UserActor, m: Mutation): Promise<boolean> {
+  const pending = st.changes.filter((c) => c.recordId === m.recordId && c.entity === m.entity);
+  if (pending.some((c) => c.cause !== 'mutation')) return false;
+  const [rows] = await st.conn.query(
+    `SELECT COUNT(*) AS n, COALESCE(SUM(cause = 'mutation' AND device_id = ? AND actor_user_id = ?), 0) AS own
+     FROM sync_changes WHERE site_id = ? AND record_id = ? AND entity = ? AND revision > ?`,
+    [st.deviceId, actor.userId, actor.siteId, m.recordId, m.entity, m.baseRevision],
+  );
+  const { n, own } = (rows as { n: number | string; own: number | string }[])[0] ?? { n: 0, own: 0 };
+  return Number(n) + pending.length > 0 && Number(n) === Number(own);
 }
 
 /**

@@ -114,11 +114,13 @@ export interface ChangeRow {
   cause: 'mutation' | 'conflict' | 'drift' | 'resolve';
   mutationId: string | null;
   actorUserId: string | null;
+  /** The device whose mutation made the change (cause 'mutation'); null otherwise. */
+  deviceId?: string | null;
 }
 
 export async function insertChanges(conn: PoolConnection, siteId: string, rows: ChangeRow[], now: Date): Promise<void> {
   for (let i = 0; i < rows.length; i += 1000) {
-    const chunk = rows.slice(i, i + 1000).map((c) => [siteId, c.seq, c.entity, c.recordId, c.revision, c.cause, c.mutationId, c.actorUserId, now]);
-    await conn.query('INSERT INTO sync_changes (site_id, seq, entity, record_id, revision, cause, mutation_id, actor_user_id, created_at) VALUES ?', [chunk]);
+    const chunk = rows.slice(i, i + 1000).map((c) => [siteId, c.seq, c.entity, c.recordId, c.revision, c.cause, c.mutationId, c.actorUserId, c.deviceId ?? null, now]);
+    await conn.query('INSERT INTO sync_changes (site_id, seq, entity, record_id, revision, cause, mutation_id, actor_user_id, device_id, created_at) VALUES ?', [chunk]);
   }
 }

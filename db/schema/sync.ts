@@ -89,11 +89,14 @@ export const syncChanges = mysqlTable(
     cause: varchar('cause', { length: 20 }).notNull(),
     mutationId: ref('mutation_id'),
     actorUserId: ref('actor_user_id'),
+    /** The device whose mutation made the change (null for a conflict flag or a resolution). */
+    deviceId: ref('device_id'),
     createdAt: at('created_at').notNull(),
   },
   // A mutation that changed its record has no outcome row of its own: its change-log row (cause
-  // 'mutation') is the outcome, found by mutation id when the device replays it.
-  (t) => [primaryKey({ columns: [t.siteId, t.seq] }), index('sync_changes_mutation').on(t.mutationId)],
+  // 'mutation') is the outcome, found by mutation id when the device replays it. A push whose base
+  // is behind reads the record's changes since that base (was each one this device's own?).
+  (t) => [primaryKey({ columns: [t.siteId, t.seq] }), index('sync_changes_mutation').on(t.mutationId), index('sync_changes_record').on(t.recordId, t.revision)],
 );
 
 /** Devices, each bound to the user who first pushed from it. */

@@ -40,7 +40,7 @@ function run(steps: Step[]) {
 
   const toMutations = (sent: QueuedMutation[]): Mutation[] => sent.map(({ mutationId, entity, recordId, baseRevision, content }) => ({ mutationId, entity, recordId, baseRevision, content }));
   const process = (msg: Msg) => {
-    if (msg.kind === 'push') inflight.push({ kind: 'pushReply', dev: msg.dev, sent: msg.sent, outcomes: server.push(toMutations(msg.sent)) });
+    if (msg.kind === 'push') inflight.push({ kind: 'pushReply', dev: msg.dev, sent: msg.sent, outcomes: server.push(toMutations(msg.sent), devices[msg.dev]!.name) });
     else if (msg.kind === 'pull') inflight.push({ kind: 'pullReply', dev: msg.dev, page: server.pull(msg.cursor, 2) });
     else if (msg.kind === 'pushReply') devices[msg.dev]!.receiveOutcomes(msg.sent, msg.outcomes);
     else devices[msg.dev]!.receivePage(msg.page);
@@ -84,7 +84,7 @@ function run(steps: Step[]) {
   for (let round = 0; round < 50; round++) {
     for (const [i, d] of devices.entries()) {
       const sent = d.batch();
-      if (sent.length) d.receiveOutcomes(sent, server.push(toMutations(sent)));
+      if (sent.length) d.receiveOutcomes(sent, server.push(toMutations(sent), d.name));
       void i;
     }
     for (const c of server.conflicts.values()) if (c.open) server.resolve(c.id, round % 2 === 0 ? 0 : -1);

@@ -64,6 +64,11 @@ describe('server decision', () => {
     expect(decideMutation({ revision: 4, awaitingReview: false }, 3)).toEqual({ kind: 'conflict' });
     expect(decideMutation({ revision: 4, awaitingReview: true }, 4)).toEqual({ kind: 'conflict' });
     expect(decideMutation(null, 2).kind).toBe('reject');
+    // Every change since the base was this device's own (a lost reply): applied on top.
+    expect(decideMutation({ revision: 4, awaitingReview: false }, 2, true)).toEqual({ kind: 'apply', revision: 5 });
+    // ...but never past an open review, nor from a base the server never had.
+    expect(decideMutation({ revision: 4, awaitingReview: true }, 3, true)).toEqual({ kind: 'conflict' });
+    expect(decideMutation({ revision: 4, awaitingReview: false }, 6, true)).toEqual({ kind: 'conflict' });
   });
 
   it('an old or missing protocol header is named; the current one passes', () => {

@@ -335,6 +335,33 @@ describe('conflicts', () => {
     });
   }
 
+  it('a reply lost on the way back, then a later edit merged on the old base: applied on top of the device’s own change, not a conflict with itself', async () => {
+    const devA = { ...tech, deviceId: v7() };
+    const e = benchEntry(tech);
+    await pushOk(devA, [mutation('bench_entry', e)]);
+    // The first edit is applied (revision 2), but its reply never reaches the tablet...
+    const [lost] = await pushOk(devA, [mutation('bench_entry', { ...e, note: 'first edit' }, 1)]);
+    expect(lost).toMatchObject({ status: 'applied', revision: 2 });
+    // ...which merges a second edit into the queue under a new id, still on base revision 1.
+    const [merged] = await pushOk(devA, [mutation('bench_entry', { ...e, note: 'first edit, then a second' }, 1)]);
+    expect(merged).toMatchObject({ status: 'applied', revision: 3 });
+    expect(await query('SELECT id FROM sync_conflicts WHERE record_id = ?', [e.id])).toEqual([]);
+    const [row] = await query<{ revision: number; content: { note: string }; awaiting_review: number }>('SELECT revision, content, awaiting_review FROM bench_entries WHERE id = ?', [e.id]);
+    expect(row).toMatchObject({ revision: 3, awaiting_review: 0 });
+    expect(row!.content.note).toBe('first edit, then a second');
+  });
+
+  it('a change from another device in between still makes a stale base a conflict', async () => {
+    const devA = { ...tech, deviceId: v7() };
+    const devB = { ...tech, deviceId: v7() };
+    const e = benchEntry(tech);
+    await pushOk(devA, [mutation('bench_entry', e)]);
+    await pushOk(devA, [mutation('bench_entry', { ...e, note: 'tablet A, reply lost' }, 1)]);
+    await pushOk(devB, [mutation('bench_entry', { ...e, note: 'tablet B on top' }, 2)]);
+    const [stale] = await pushOk(devA, [mutation('bench_entry', { ...e, note: 'tablet A merged on base 1' }, 1)]);
+    expect(stale).toMatchObject({ status: 'conflict', record: { revision: 3, awaitingReview: true } });
+  });
+
   it('a supervisor merges field by field; the result reaches devices as a new revision and is audit-logged', async () => {
     const e = benchEntry(tech, { tags: ['dissolver'] });
     await pushOk(tech, [mutation('bench_entry', e)]);

@@ -8,6 +8,8 @@ import type { Mutation, MutationOutcome, PullResponse, ServerRecord } from '../p
 interface Rec {
   record: ServerRecord;
   history: unknown[];
+  /** The change log of this record: the revision each change left and the device whose mutation made it (null: a conflict flag or a resolution). */
+  changes: { revision: number; device: string | null }[];
 }
 
 export class MemoryServer {
@@ -18,11 +20,11 @@ export class MemoryServer {
   seq = 0;
   private n = 0;
 
-  push(mutations: Mutation[]): MutationOutcome[] {
+  push(mutations: Mutation[], device = 'device'): MutationOutcome[] {
     return mutations.map((m) => {
       const first = this.outcomes.get(m.mutationId);
       if (first) return first.status === 'retry' ? first : { ...first, ...this.withRecord(m.recordId, first), duplicate: true as const };
-      const o = this.apply(m);
+      const o = this.apply(m, device);
       this.outcomes.set(m.mutationId, o);
       return o;
     });
@@ -33,17 +35,19 @@ export class MemoryServer {
     return 'record' in o && r ? { record: { ...r.record } } : {};
   }
 
-  private apply(m: Mutation): MutationOutcome {
+  private apply(m: Mutation, device: string): MutationOutcome {
     const rec = this.records.get(m.recordId);
     if (rec && sameJson(rec.record.content, m.content) && !rec.record.awaitingReview) {
       return { mutationId: m.mutationId, recordId: m.recordId, status: 'applied', revision: rec.record.revision, record: { ...rec.record } };
     }
-    const d = decideMutation(rec ? { revision: rec.record.revision, awaitingReview: rec.record.awaitingReview } : null, m.baseRevision);
+    const since = rec?.changes.filter((c) => c.revision > m.baseRevision) ?? [];
+    const ownSinceBase = since.length > 0 && since.every((c) => c.device === device);
+    const d = decideMutation(rec ? { revision: rec.record.revision, awaitingReview: rec.record.awaitingReview } : null, m.baseRevision, ownSinceBase);
     if (d.kind === 'reject') return { mutationId: m.mutationId, recordId: m.recordId, status: 'rejected', reason: d.reason };
     if (d.kind === 'apply') {
       const seq = this.nextSeq(m.recordId);
       const record: ServerRecord = { entity: m.entity, id: m.recordId, revision: d.revision, seq, awaitingReview: false, content: m.content };
-      this.records.set(m.recordId, { record, history: [...(rec?.history ?? []), m.content] });
+      this.records.set(m.recordId, { record, history: [...(rec?.history ?? []), m.content], changes: [...(rec?.changes ?? []), { revision: d.revision, device }] });
       return { mutationId: m.mutationId, recordId: m.recordId, status: 'applied', revision: d.revision, record: { ...record } };
     }
     let c = [...this.conflicts.values()].find((x) => x.recordId === m.recordId && x.open);
@@ -52,7 +56,10 @@ export class MemoryServer {
       this.conflicts.set(c.id, c);
     }
     c.versions.push(m.content);
-    if (!rec!.record.awaitingReview) rec!.record = { ...rec!.record, awaitingReview: true, seq: this.nextSeq(m.recordId) };
+    if (!rec!.record.awaitingReview) {
+      rec!.record = { ...rec!.record, awaitingReview: true, seq: this.nextSeq(m.recordId) };
+      rec!.changes.push({ revision: rec!.record.revision, device: null });
+    }
     return { mutationId: m.mutationId, recordId: m.recordId, status: 'conflict', conflictId: c.id, record: { ...rec!.record } };
   }
 
@@ -75,6 +82,7 @@ export class MemoryServer {
     const content = pick < 0 || pick >= c.versions.length ? rec.record.content : c.versions[pick];
     rec.record = { ...rec.record, content, revision: rec.record.revision + 1, awaitingReview: false, seq: this.nextSeq(c.recordId) };
     rec.history.push(content);
+    rec.changes.push({ revision: rec.record.revision, device: null });
     c.open = false;
   }
 }
