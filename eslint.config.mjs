@@ -12,6 +12,25 @@ const config = [
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
     },
   },
+  {
+    // Code that runs in the browser on the bench screens: keep classic zod (about 36 kB gzipped, not
+    // tree-shakable) out of it. Schemas there use '@/lib/validation/zod-mini'; the engine comes from
+    // '@/lib/thermo/engine' (the '@/lib/thermo' entry adds the server's classic-zod request schema).
+    files: ['components/sheets/**', 'components/bench/**', 'components/ladder/**', 'lib/local/**', 'lib/workbench/**', 'lib/sheets/**', 'lib/bench/**', 'lib/thermo/**'],
+    ignores: ['**/*.test.ts', 'lib/thermo/index.ts', 'lib/thermo/request-schema.ts'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            { name: 'zod', allowTypeImports: true, message: "Browser code: use '@/lib/validation/zod-mini' (classic zod loads whole)." },
+            { name: '@/lib/thermo', message: "Browser code: import the engine from '@/lib/thermo/engine'." },
+            { name: '@/lib/sync/protocol', allowTypeImports: true, message: "Browser code: the protocol's messages are classic zod; take the version from '@/lib/sync/protocol-version'." },
+          ],
+        },
+      ],
+    },
+  },
 ];
 
 export default config;

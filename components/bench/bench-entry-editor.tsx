@@ -3,9 +3,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { ZodError } from 'zod';
 import { newBenchEntry, saveBenchEntry, savePhoto, syncNow, useBenchEntries, useSheets, type BenchEntry, type LocalRecord } from '@/lib/local';
 import { formatBytes } from '@/lib/photos/photo-limits';
+import { isZodError } from '@/lib/validation/zod-mini';
 import { parseTags } from './bench-log-groups';
 import { benchEntryFormSchema, type BenchEntryFormValues } from './bench-entry-form-schema';
 import { useBenchSite } from './bench-site-context';
@@ -79,7 +79,7 @@ export function BenchEntryEditor({ existing, defaults, onSaved, onCancel }: Benc
       if (navigator.onLine) void syncNow();
       onSaved(saved.id);
     } catch (error) {
-      setSaveError(error instanceof ZodError ? error.issues.map((i) => `${i.path.join('.') || 'entry'}: ${i.message}`).join('; ') : error instanceof Error ? error.message : 'The entry could not be saved on this device.');
+      setSaveError(isZodError(error) ? error.issues.map((i) => `${i.path.join('.') || 'entry'}: ${i.message}`).join('; ') : error instanceof Error ? error.message : 'The entry could not be saved on this device.');
     }
   });
 

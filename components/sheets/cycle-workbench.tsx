@@ -4,7 +4,8 @@
 // basis; the result and the ladder update as you type (no submit button).
 import { useMemo, useState } from 'react';
 import { Ladder } from '@/components/ladder/ladder';
-import { ENERGY_BASIS_TEXT, LATTICE_CONVENTION_TEXT, type SolvedCycle } from '@/lib/thermo';
+import { ENERGY_BASIS_TEXT, LATTICE_CONVENTION_TEXT } from '@/lib/thermo/conventions';
+import type { SolvedCycle } from '@/lib/thermo/cycle-solve';
 import { switchConvention, type CycleForm, type CycleSheetBuild, type StepRow } from '@/lib/workbench/cycle-sheet';
 import { errorFor } from '@/lib/workbench/field-error';
 import { energyText, formatEnergy, kjToTyped, type DisplayUnit } from '@/lib/workbench/format-energy';

@@ -1,6 +1,6 @@
 // The model check beside the cycle value: four theoretical lattice enthalpies, the gap in %, the
 // flag, what it means, and the circularity note for oxides, sulfides and nitrides.
-import type { ModelCheckResult } from '@/lib/thermo';
+import type { ModelCheckResult } from '@/lib/thermo/engine';
 import { energyText, formatNumber, type DisplayUnit } from '@/lib/workbench/format-energy';
 
 export interface ModelCheckPanelProps {

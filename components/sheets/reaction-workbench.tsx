@@ -2,7 +2,7 @@
 // Reaction (Hess) sheet: the reaction as written, ΔrH° from formation enthalpies in the edition,
 // a batch figure, and values typed (with their source) for species the edition lacks.
 import { Controller } from 'react-hook-form';
-import { FLUORIDE_CAUTION } from '@/lib/thermo';
+import { FLUORIDE_CAUTION } from '@/lib/thermo/engine';
 import { errorFor } from '@/lib/workbench/field-error';
 import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { reactionFormSchema, reactionTerms, type ReactionForm } from '@/lib/workbench/reaction-sheet';

@@ -3,14 +3,14 @@
 // store (so it works the same offline), the status steps draft → submitted → signed off, and the PDF.
 import { useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
-import { ZodError } from 'zod';
 import { deleteSheet, LocalStoreError, newSheet, saveSheet, startNewSheetVersion, syncNow, useEditionInForce, type LocalRecord, type Sheet, type SheetKind } from '@/lib/local';
-import { ENGINE_VERSION } from '@/lib/thermo';
+import { ENGINE_VERSION } from '@/lib/thermo/version';
 import { buildCycleSheet } from '@/lib/workbench/cycle-sheet';
 import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { editionFromCache, editionLabel, saltSuggestions } from '@/lib/workbench/edition-source';
 import { DISPLAY_UNITS } from '@/lib/workbench/format-energy';
 import { KIND_TEXT, mayEdit, mayReturnToDraft, maySignOff, maySubmit, STATUS_TEXT } from '@/lib/workbench/sheet-rules';
+import { isZodError } from '@/lib/validation/zod-mini';
 import { makeValueSource } from '@/lib/workbench/value-source';
 import { CycleWorkbench } from './cycle-workbench';
 import { Field } from './field';
@@ -107,7 +107,7 @@ export function SheetEditor({ ctx, kind, record, initialLotRef }: SheetEditorPro
       if (!sheet) go(`/sheets/open?id=${saved.id}`, true);
       return saved;
     } catch (e) {
-      if (e instanceof ZodError) {
+      if (isZodError(e)) {
         const errs: Record<string, string> = {};
         for (const i of e.issues) errs[String(i.path[0] ?? 'sheet')] = i.message;
         setMetaErrors(errs);

@@ -1,10 +1,19 @@
 // The typed form state of each sheet kind, kept in the sheet's problem (`problem.form`) so a saved
 // sheet reopens exactly as typed: overrides with their reasons, units, the unknown, batch inputs.
 import type { Sheet, SheetKind } from '@/lib/sheets/sheet-schema';
-import { calorimetryFormSchema, EMPTY_CALORIMETRY_FORM, type CalorimetryForm } from '@/lib/workbench/calorimetry-sheet';
 import { EMPTY_CYCLE_FORM, type CycleForm } from '@/lib/workbench/cycle-sheet';
-import { dissolutionFormSchema, EMPTY_DISSOLUTION_FORM, type DissolutionForm } from '@/lib/workbench/dissolution-sheet';
-import { EMPTY_REACTION_FORM, reactionFormSchema, type ReactionForm } from '@/lib/workbench/reaction-sheet';
+// The other kinds' forms without their builders, which load with their panels (other-kinds.tsx).
+import {
+  calorimetryFormSchema,
+  dissolutionFormSchema,
+  EMPTY_CALORIMETRY_FORM,
+  EMPTY_DISSOLUTION_FORM,
+  EMPTY_REACTION_FORM,
+  reactionFormSchema,
+  type CalorimetryForm,
+  type DissolutionForm,
+  type ReactionForm,
+} from '@/lib/workbench/other-forms';
 
 export type AnyForm = { kind: 'cycle'; form: CycleForm } | { kind: 'dissolution'; form: DissolutionForm } | { kind: 'reaction'; form: ReactionForm } | { kind: 'calorimetry'; form: CalorimetryForm };
 

@@ -4,10 +4,10 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef } from 'react';
 import { useForm, type DefaultValues, type FieldValues, type Resolver } from 'react-hook-form';
-import type { z } from 'zod';
+import type * as z from '@/lib/validation/zod-mini';
 import { markInput } from './perf-marks';
 
-export function useLiveForm<T extends FieldValues>(schema: z.ZodType<T>, defaults: T, onChange: (v: T) => void) {
+export function useLiveForm<T extends FieldValues>(schema: z.ZodMiniType<T>, defaults: T, onChange: (v: T) => void) {
   const form = useForm<T>({ resolver: zodResolver(schema as never) as unknown as Resolver<T>, mode: 'onChange', defaultValues: defaults as DefaultValues<T> });
   const latest = useRef(onChange);
   useEffect(() => {

@@ -1,11 +1,11 @@
 // Writes through the local store: every save updates the record on the device AND queues it for
 // sync in one IndexedDB transaction, so a record on screen is never missing from the queue.
-import { ZodError } from 'zod';
 import { benchEntrySchema, photoMetaSchema, type BenchEntry, type PhotoMeta } from '@/lib/bench/bench-entry-schema';
 import { newId } from '@/lib/ids';
 import { sheetSchema, type Sheet } from '@/lib/sheets/sheet-schema';
 import { queueEdit, type LocalRecord } from '@/lib/sync/local-state';
 import type { Entity } from '@/lib/sync/protocol';
+import * as z from '@/lib/validation/zod-mini';
 import { getActiveIdentity, getActiveStore } from './active-store';
 import { recordKey, type RungbookLocalDb } from './local-db';
 
@@ -50,12 +50,6 @@ async function writeRecord<T>(entity: Entity, content: T & { id: string }): Prom
   return content;
 }
 
-function parseOrThrow<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: ZodError } }, value: unknown): T {
-  const parsed = schema.safeParse(value);
-  if (!parsed.success) throw parsed.error;
-  return parsed.data;
-}
-
 /** A new draft sheet with an id made on the device, authored by the signed-in user. */
 export function newSheet(fields: Pick<Sheet, 'kind' | 'title'> & Partial<Sheet>): Sheet {
   const who = getActiveIdentity();
@@ -88,7 +82,7 @@ export function newSheet(fields: Pick<Sheet, 'kind' | 'title'> & Partial<Sheet>)
  * fields), stored, and queued; edits of a sheet still waiting merge into one mutation.
  */
 export async function saveSheet(sheet: Sheet): Promise<Sheet> {
-  const valid = parseOrThrow<Sheet>(sheetSchema, { ...sheet, updatedAt: nowIso() });
+  const valid: Sheet = z.parse(sheetSchema, { ...sheet, updatedAt: nowIso() });
   return writeRecord('sheet', valid);
 }
 
@@ -126,7 +120,7 @@ export function newBenchEntry(fields: Partial<BenchEntry> = {}): BenchEntry {
 }
 
 export async function saveBenchEntry(entry: BenchEntry): Promise<BenchEntry> {
-  const valid = parseOrThrow<BenchEntry>(benchEntrySchema, { ...entry, updatedAt: nowIso() });
+  const valid: BenchEntry = z.parse(benchEntrySchema, { ...entry, updatedAt: nowIso() });
   return writeRecord('bench_entry', valid);
 }
 
@@ -142,7 +136,7 @@ export async function deleteBenchEntry(id: string): Promise<void> {
  * append-only metadata record queued for sync.
  */
 export async function savePhoto(meta: PhotoMeta, blob: Blob): Promise<PhotoMeta> {
-  const valid = parseOrThrow<PhotoMeta>(photoMetaSchema, meta);
+  const valid: PhotoMeta = z.parse(photoMetaSchema, meta);
   const store = requireStore();
   await store.photos.put({ id: valid.id, blob, uploadedAt: null });
   return writeRecord('photo', valid);

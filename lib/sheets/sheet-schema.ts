@@ -1,6 +1,6 @@
-// The synced SHEET record: one saved calculation. Pure zod (no React, Next.js, DOM or database):
+// The synced SHEET record: one saved calculation. Pure zod/mini (no React, Next.js, DOM or database):
 // the workbench form, the device's local store and the sync push handler all use this schema.
-import { z } from 'zod';
+import * as z from '@/lib/validation/zod-mini';
 
 export const SHEET_KINDS = ['cycle', 'dissolution', 'reaction', 'calorimetry'] as const;
 export type SheetKind = (typeof SHEET_KINDS)[number];
@@ -10,9 +10,9 @@ export const SHEET_STATUSES = ['draft', 'submitted', 'signed_off'] as const;
 export type SheetStatus = (typeof SHEET_STATUSES)[number];
 
 /** Device-made ids are UUIDs (v7 from `lib/ids.ts`); any version is accepted, lowercase or not. */
-export const recordIdSchema = z.string().regex(/^[0-9a-fA-F]{8}-[0-9a-fA-F]{4}-[0-9a-fA-F]{4}-[0-9a-fA-F]{4}-[0-9a-fA-F]{12}$/, { message: 'Must be a UUID' });
+export const recordIdSchema = z.string().check(z.regex(/^[0-9a-fA-F]{8}-[0-9a-fA-F]{4}-[0-9a-fA-F]{4}-[0-9a-fA-F]{4}-[0-9a-fA-F]{12}$/, { message: 'Must be a UUID' }));
 /** Ids of rows made elsewhere (users, areas, editions): app-made varchar(36). */
-export const refIdSchema = z.string().min(1).max(36);
+export const refIdSchema = z.string().check(z.minLength(1), z.maxLength(36));
 export const isoTimeSchema = z.iso.datetime({ offset: true, message: 'Must be an ISO 8601 date-time' });
 
 /**
@@ -21,16 +21,16 @@ export const isoTimeSchema = z.iso.datetime({ offset: true, message: 'Must be an
  * edition (edition drift, re-solve with the edition in force); an `entered` one was typed in.
  */
 export const resolvedInputSchema = z.object({
-  path: z.array(z.union([z.string().max(100), z.number().int().min(0)])).min(1).max(12),
+  path: z.array(z.union([z.string().check(z.maxLength(100)), z.number().check(z.int(), z.minimum(0))])).check(z.minLength(1), z.maxLength(12)),
   origin: z.discriminatedUnion('type', [
     z.object({
       type: z.literal('edition'),
       editionId: refIdSchema,
-      species: z.string().min(1).max(80),
+      species: z.string().check(z.minLength(1), z.maxLength(80)),
       phase: z.enum(['cr', 'l', 'g', 'aq']),
-      property: z.string().min(1).max(60),
+      property: z.string().check(z.minLength(1), z.maxLength(60)),
     }),
-    z.object({ type: z.literal('entered'), note: z.string().max(500).optional() }),
+    z.object({ type: z.literal('entered'), note: z.optional(z.string().check(z.maxLength(500))) }),
   ]),
 });
 export type ResolvedInput = z.infer<typeof resolvedInputSchema>;
@@ -41,50 +41,51 @@ export type ResolvedInput = z.infer<typeof resolvedInputSchema>;
  * engine's own schema when it recomputes, and a submitted or signed-off sheet must solve.
  */
 export const sheetProblemSchema = z
-  .object({ kind: z.enum(SHEET_KINDS) })
-  .loose()
-  .refine((p) => JSON.stringify(p).length <= 200_000, { message: 'The problem is too large (over 200 kB)' });
+  .looseObject({ kind: z.enum(SHEET_KINDS) })
+  .check(z.refine((p) => JSON.stringify(p).length <= 200_000, { message: 'The problem is too large (over 200 kB)' }));
 
 export const sheetSchema = z
   .object({
     id: recordIdSchema,
     kind: z.enum(SHEET_KINDS),
-    title: z.string().trim().min(1, { message: 'Give the sheet a title' }).max(200),
+    title: z.string().check(z.trim(), z.minLength(1, { message: 'Give the sheet a title' }), z.maxLength(200)),
     /** Lot or batch reference as written on the plant's paperwork. */
-    lotRef: z.string().trim().max(80).nullable(),
-    areaId: refIdSchema.nullable(),
-    note: z.string().max(10_000),
+    lotRef: z.nullable(z.string().check(z.trim(), z.maxLength(80))),
+    areaId: z.nullable(refIdSchema),
+    note: z.string().check(z.maxLength(10_000)),
     status: z.enum(SHEET_STATUSES),
-    problem: sheetProblemSchema.nullable(),
+    problem: z.nullable(sheetProblemSchema),
     /** Every input value with its source (edition value or typed in). */
-    inputs: z.array(resolvedInputSchema).max(500),
+    inputs: z.array(resolvedInputSchema).check(z.maxLength(500)),
     /** The result the device computed (the server stores its own and flags a difference). */
-    result: z.unknown().nullable(),
-    pinnedEditionId: refIdSchema.nullable(),
-    engineVersion: z.string().max(60).nullable(),
+    result: z.nullable(z.unknown()),
+    pinnedEditionId: z.nullable(refIdSchema),
+    engineVersion: z.nullable(z.string().check(z.maxLength(60))),
     /** Sheet version (not the sync revision): 1, then +1 for each version after a sign-off. */
-    version: z.number().int().min(1).max(10_000),
-    previousVersionId: recordIdSchema.nullable(),
+    version: z.number().check(z.int(), z.minimum(1), z.maximum(10_000)),
+    previousVersionId: z.nullable(recordIdSchema),
     authorId: refIdSchema,
-    signedOffBy: refIdSchema.nullable(),
-    signedOffAt: isoTimeSchema.nullable(),
+    signedOffBy: z.nullable(refIdSchema),
+    signedOffAt: z.nullable(isoTimeSchema),
     /** Tombstone: a deleted sheet stays as a record so every device learns of the delete. */
     deleted: z.boolean(),
     createdAt: isoTimeSchema,
     updatedAt: isoTimeSchema,
   })
-  .superRefine((s, ctx) => {
-    if (s.problem && s.problem.kind !== s.kind) ctx.addIssue({ code: 'custom', path: ['problem', 'kind'], message: `Must match the sheet kind (${s.kind})` });
-    if (s.status === 'signed_off' && (!s.signedOffBy || !s.signedOffAt)) {
-      ctx.addIssue({ code: 'custom', path: ['signedOffBy'], message: 'A signed-off sheet names who signed it off and when' });
-    }
-    if (s.status !== 'signed_off' && (s.signedOffBy || s.signedOffAt)) {
-      ctx.addIssue({ code: 'custom', path: ['signedOffBy'], message: 'Only a signed-off sheet has a sign-off' });
-    }
-    if ((s.version > 1) !== (s.previousVersionId !== null)) {
-      ctx.addIssue({ code: 'custom', path: ['previousVersionId'], message: 'Version 1 has no previous version; later versions name theirs' });
-    }
-  });
+  .check(
+    z.superRefine((s, ctx) => {
+      if (s.problem && s.problem.kind !== s.kind) ctx.addIssue({ code: 'custom', path: ['problem', 'kind'], message: `Must match the sheet kind (${s.kind})` });
+      if (s.status === 'signed_off' && (!s.signedOffBy || !s.signedOffAt)) {
+        ctx.addIssue({ code: 'custom', path: ['signedOffBy'], message: 'A signed-off sheet names who signed it off and when' });
+      }
+      if (s.status !== 'signed_off' && (s.signedOffBy || s.signedOffAt)) {
+        ctx.addIssue({ code: 'custom', path: ['signedOffBy'], message: 'Only a signed-off sheet has a sign-off' });
+      }
+      if ((s.version > 1) !== (s.previousVersionId !== null)) {
+        ctx.addIssue({ code: 'custom', path: ['previousVersionId'], message: 'Version 1 has no previous version; later versions name theirs' });
+      }
+    }),
+  );
 export type Sheet = z.infer<typeof sheetSchema>;
 
 /** Fields a person edits and a supervisor may merge field by field (reconcile screen). */

@@ -1,57 +1,13 @@
 // Calorimetry sheet: reduce a solution-calorimetry run to an enthalpy of solution and say which
 // form the lot is (anhydrous or which hydrate), against predictions from the edition.
-import { z } from 'zod';
 import type { ReferenceValue } from '@/lib/reference/properties';
 import type { ResolvedInput } from '@/lib/sheets/sheet-schema';
-import { formatCounts, isThermoInputError, parseFormula, safeSolve } from '@/lib/thermo';
+import { formatCounts, isThermoInputError, parseFormula, safeSolve } from '@/lib/thermo/engine';
 import { buildDissolutionSheet, EMPTY_DISSOLUTION_FORM, normaliseFormula, type SheetBuild } from './dissolution-sheet';
+import { calorimetryFormSchema, EMPTY_CALORIMETRY_FORM, type CalorimetryForm } from './other-forms';
 import { makeValueSource, type ValueSource } from './value-source';
 
-const positive = (label: string) =>
-  z
-    .string()
-    .trim()
-    .min(1, { message: `Type the ${label}` })
-    .refine((s) => Number.isFinite(Number(s)) && Number(s) > 0, { message: `The ${label} must be a number above zero` });
-const temperature = (label: string) =>
-  z
-    .string()
-    .trim()
-    .refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) > -273.15), { message: `The ${label} must be a temperature in °C above −273.15` });
-
-export const calorimetryFormSchema = z.object({
-  salt: z.string().trim().min(1, { message: 'Type the salt the lot should be, e.g. CaCl2' }).max(60),
-  sampleMassG: positive('sample mass'),
-  waterMassG: positive('water mass'),
-  heatCapacityBasis: z.enum(['solution', 'water']),
-  specificHeat: z.string().trim().refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) > 0), { message: 'The specific heat must be a number above zero, or left empty' }),
-  calorimeterConstant: z.string().trim().refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) >= 0), { message: 'The calorimeter constant must be a number, zero or more (J/K)' }),
-  /** 'pair': before/after temperatures; 'readings': time,temperature lines with the mixing time. */
-  mode: z.enum(['pair', 'readings']),
-  beforeC: temperature('temperature before'),
-  afterC: temperature('temperature after'),
-  readings: z.string().max(200_000),
-  mixingTimeS: z.string().trim(),
-  afterPeriodStartS: z.string().trim(),
-  toleranceKjPerMol: z.string().trim().refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) >= 0), { message: 'The tolerance must be a number, zero or more' }),
-});
-export type CalorimetryForm = z.infer<typeof calorimetryFormSchema>;
-
-export const EMPTY_CALORIMETRY_FORM: CalorimetryForm = {
-  salt: '',
-  sampleMassG: '',
-  waterMassG: '100',
-  heatCapacityBasis: 'solution',
-  specificHeat: '',
-  calorimeterConstant: '',
-  mode: 'pair',
-  beforeC: '',
-  afterC: '',
-  readings: '',
-  mixingTimeS: '',
-  afterPeriodStartS: '',
-  toleranceKjPerMol: '',
-};
+export { calorimetryFormSchema, EMPTY_CALORIMETRY_FORM, type CalorimetryForm } from './other-forms';
 
 /** The salt and its hydrates that the edition has an enthalpy of formation for. */
 export function candidateForms(salt: string, values: readonly ReferenceValue[]): string[] {

@@ -2,18 +2,15 @@
 // convention) and the reference values, build a fully explicit solve request — every value carries
 // its source, so the sheet re-solves offline forever — and solve it with the engine.
 import type { ResolvedInput } from '@/lib/sheets/sheet-schema';
-import {
-  analyzeBinarySalt,
-  buildBornHaberCycle,
-  isThermoInputError,
-  latticeToConvention,
-  MADELUNG_CONSTANTS,
-  safeSolve,
-  type BornHaberCycle,
-  type EnergyBasis,
-  type LatticeConvention,
-  type SolveResult,
-} from '@/lib/thermo';
+// The engine's modules one by one, not '@/lib/thermo/engine': this screen solves cycles only
+// (`safeSolveCycle`), so it does not load the other kinds' engine code.
+import { MADELUNG_CONSTANTS } from '@/lib/thermo/constants';
+import { latticeToConvention, type EnergyBasis, type LatticeConvention } from '@/lib/thermo/conventions';
+import { buildBornHaberCycle, type BornHaberCycle } from '@/lib/thermo/cycle';
+import { isThermoInputError } from '@/lib/thermo/errors';
+import { analyzeBinarySalt } from '@/lib/thermo/ion-charges';
+import { safeSolveCycle } from '@/lib/thermo/solve-cycle';
+import type { SolveResult } from '@/lib/thermo/engine';
 import type { FieldError } from './field-error';
 import { isDisplayUnit, typedToKj, type DisplayUnit } from './format-energy';
 import { ionSpecies, tracingLookup, type ValueSource } from './value-source';
@@ -216,7 +213,7 @@ export function buildCycleSheet(form: CycleForm, values: ValueSource): CycleShee
   const request = { kind: 'cycle' as const, problem };
   if (cycle.missing.length > 0) return { stepKeys, rows, errors, request, inputs, outcome: null, editionIds: [...editionIds] };
 
-  const solved = safeSolve(request);
+  const solved = safeSolveCycle(request);
   if (!solved.ok) {
     return { stepKeys, rows, errors: [...errors, ...solved.errors.map((e) => ({ field: formField(e.field), message: e.message }))], request, inputs, outcome: null, editionIds: [...editionIds] };
   }

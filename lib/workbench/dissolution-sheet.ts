@@ -1,34 +1,14 @@
 // Dissolution / batch-heat sheet: the enthalpy of solution from formation enthalpies (primary
 // route), its lattice + hydration decomposition (an explanation on one stated scale), and the
 // batch heat with its cautions. Values come from the reference edition; every one is traced.
-import { z } from 'zod';
 import type { ResolvedInput } from '@/lib/sheets/sheet-schema';
-import { analyzeBinarySalt, formatCounts, isThermoInputError, parseFormula, safeSolve, type SolveResult } from '@/lib/thermo';
+import { analyzeBinarySalt, formatCounts, isThermoInputError, parseFormula, safeSolve, type SolveResult } from '@/lib/thermo/engine';
 import { buildCycleSheet, EMPTY_CYCLE_FORM } from './cycle-sheet';
 import type { FieldError } from './field-error';
+import type { DissolutionForm } from './other-forms';
 import { ionSpecies, makeValueSource, type ValueSource } from './value-source';
 
-const numberText = (label: string, check: (n: number) => boolean, message: string) =>
-  z
-    .string()
-    .trim()
-    .min(1, { message: `Type the ${label}` })
-    .refine((s) => Number.isFinite(Number(s)), { message: `The ${label} must be a number` })
-    .refine((s) => check(Number(s)), { message });
-
-export const dissolutionFormSchema = z.object({
-  formula: z.string().trim().min(1, { message: 'Type the formula of the salt, e.g. CaCl2 or MgCl2·6H2O' }).max(60),
-  withBatch: z.boolean(),
-  saltMassKg: numberText('salt mass', (n) => n >= 0, 'The salt mass cannot be negative'),
-  waterMassKg: numberText('water mass', (n) => n > 0, 'The water mass must be more than zero'),
-  startTemperatureC: numberText('start temperature', (n) => n > -273.15, 'Below absolute zero (−273.15 °C)'),
-  /** Empty: the engine's default (4.184 J/(g·K) on the water alone, which overstates the rise). */
-  specificHeat: z.string().trim().refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) > 0), { message: 'The specific heat must be a number above zero, or left empty' }),
-  heatCapacityAppliesTo: z.enum(['water', 'solution']),
-});
-export type DissolutionForm = z.infer<typeof dissolutionFormSchema>;
-
-export const EMPTY_DISSOLUTION_FORM: DissolutionForm = { formula: '', withBatch: true, saltMassKg: '250', waterMassKg: '1000', startTemperatureC: '25', specificHeat: '', heatCapacityAppliesTo: 'water' };
+export { dissolutionFormSchema, EMPTY_DISSOLUTION_FORM, type DissolutionForm } from './other-forms';
 
 export interface SheetBuild {
   errors: FieldError[];

@@ -1,7 +1,7 @@
 // The reference values a sheet draws on: the edition in force (as cached on the device) and, for a
 // saved sheet, the edition values it already carries (its pinned values re-solve the same forever).
 import type { Phase, PropertyCode, ReferenceValue } from '@/lib/reference/properties';
-import { lookupFromReferenceValues, type ReferenceLookup } from '@/lib/thermo';
+import { lookupFromReferenceValues, type ReferenceLookup } from '@/lib/thermo/reference-lookup';
 
 export interface EditionInUse {
   id: string;

@@ -1,6 +1,7 @@
 // Numbers on screen, in the PDF and in the ladder, formatted one way. The engine works in kJ/mol;
 // each user reads (and types) kJ/mol, kcal/mol or eV. Conversion is exact (decimal.js via the engine).
-import { convertEnergy, Dec, fromKjPerMol, toKjPerMol } from '@/lib/thermo';
+import { Dec } from '@/lib/thermo/decimal';
+import { convertEnergy, fromKjPerMol, toKjPerMol } from '@/lib/thermo/units';
 
 export const DISPLAY_UNITS = ['kJ/mol', 'kcal/mol', 'eV'] as const;
 export type DisplayUnit = (typeof DISPLAY_UNITS)[number];

@@ -1,7 +1,8 @@
 // Geometry of the ladder: the Born–Haber cycle drawn to scale. Each state of the system is a rung
 // at its enthalpy (elements in their standard states = 0); each step is an arrow between two rungs,
 // in its own column, left to right in cycle order. Pure: the SVG component only draws this.
-import { Dec, type SolvedCycle } from '@/lib/thermo';
+import type { SolvedCycle } from '@/lib/thermo/cycle-solve';
+import { Dec } from '@/lib/thermo/decimal';
 
 export interface LadderRung {
   /** Enthalpy of this state relative to the elements, kJ/mol of salt. */

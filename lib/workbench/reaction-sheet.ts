@@ -1,22 +1,13 @@
 // Reaction (Hess) sheet: ΔrH° from standard enthalpies of formation in the edition, per mole of
 // reaction and for a batch. The balance is checked first, naming the element or charge.
-import { z } from 'zod';
 import type { ResolvedInput } from '@/lib/sheets/sheet-schema';
-import { analyzeBinarySalt, checkBalance, Dec, isThermoInputError, isZeroByDefinition, parseReaction, safeSolve, type ParsedReaction } from '@/lib/thermo';
+import { analyzeBinarySalt, checkBalance, Dec, isThermoInputError, isZeroByDefinition, parseReaction, safeSolve, type ParsedReaction } from '@/lib/thermo/engine';
 import type { SheetBuild } from './dissolution-sheet';
 import { parseTyped } from './format-energy';
+import type { ReactionForm } from './other-forms';
 import { ionSpecies, type ValueSource } from './value-source';
 
-export const reactionFormSchema = z.object({
-  reaction: z.string().trim().min(1, { message: 'Write the reaction, e.g. CaO(cr) + 2 HCl(aq) -> CaCl2(aq) + H2O(l)' }).max(500),
-  batchSpecies: z.string().trim().max(80),
-  batchMassKg: z.string().trim().refine((s) => s === '' || (Number.isFinite(Number(s)) && Number(s) > 0), { message: 'The batch mass must be a number above zero, or left empty' }),
-  /** Values typed for species the edition lacks (kJ/mol), with their source. */
-  entries: z.record(z.string(), z.object({ value: z.string(), source: z.string() })),
-});
-export type ReactionForm = z.infer<typeof reactionFormSchema>;
-
-export const EMPTY_REACTION_FORM: ReactionForm = { reaction: '', batchSpecies: '', batchMassKg: '', entries: {} };
+export { EMPTY_REACTION_FORM, reactionFormSchema, type ReactionForm } from './other-forms';
 
 /** The species terms of a reaction (for the entry rows), or null if it does not parse. */
 export function reactionTerms(text: string): ParsedReaction | null {

@@ -1,7 +1,7 @@
 // The sheet as a record: every input with its source, the edition, the result with its uncertainty,
 // convention and basis, the model check, notes and the sign-off. Shared by the PDF and tests.
 import type { Sheet } from '@/lib/sheets/sheet-schema';
-import type { SolveResult } from '@/lib/thermo';
+import type { SolveResult } from '@/lib/thermo/engine';
 import { energyText, formatNumber, formatRounded, type DisplayUnit } from './format-energy';
 import { KIND_TEXT, STATUS_TEXT } from './sheet-rules';
 

@@ -1,6 +1,6 @@
 // One line per sheet for the list and the PDF: what it is about and its headline result.
 import type { Sheet } from '@/lib/sheets/sheet-schema';
-import type { SolveResult } from '@/lib/thermo';
+import type { SolveResult } from '@/lib/thermo/engine';
 import { energyText, type DisplayUnit } from './format-energy';
 
 /** The formula, reaction or salt a sheet is about, read from its stored problem. */

@@ -2,7 +2,7 @@
 // pinned values), then the edition in force on this device. Every value says which edition it is from.
 import type { Phase, PropertyCode, ReferenceValue } from '@/lib/reference/properties';
 import type { ResolvedInput } from '@/lib/sheets/sheet-schema';
-import type { ReferenceLookup } from '@/lib/thermo';
+import type { ReferenceLookup } from '@/lib/thermo/engine';
 import type { EditionInUse } from './edition-source';
 
 export interface SourcedValue {
