@@ -5,7 +5,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { postJson } from '@/components/ui/post-json';
-import { createTokenSchema } from '@/lib/validation/admin';
+import { createTokenSchema } from '@/lib/validation/admin-forms';
 
 interface ApiToken {
   id: string;

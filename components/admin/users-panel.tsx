@@ -7,7 +7,7 @@ import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { DataTable } from '@/components/ui/data-table';
 import { postJson } from '@/components/ui/post-json';
-import { inviteUserSchema } from '@/lib/validation/admin';
+import { inviteUserSchema } from '@/lib/validation/admin-forms';
 
 export interface SiteUser {
   id: string;

@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { postJson } from '@/components/ui/post-json';
-import { acceptInvitationSchema } from '@/lib/validation/auth';
+import { acceptInvitationSchema } from '@/lib/validation/auth-forms';
 
 type Values = { token: string; password: string; confirm: string };
 

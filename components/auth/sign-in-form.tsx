@@ -6,7 +6,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { postJson } from '@/components/ui/post-json';
-import { signInLinkSchema, signInSchema } from '@/lib/validation/auth';
+import { signInLinkSchema, signInSchema } from '@/lib/validation/auth-forms';
 
 type SignInValues = { email: string; password: string };
 

@@ -6,7 +6,7 @@ import Link from 'next/link';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { postJson } from '@/components/ui/post-json';
-import { rejectSchema, updateDraftSchema } from '@/lib/editions/schemas';
+import { rejectSchema, updateDraftSchema } from '@/lib/editions/form-schemas';
 import type { ReferenceValue } from '@/lib/reference/properties';
 import { CsvImport } from './csv-import';
 import { DiffView } from './diff-view';

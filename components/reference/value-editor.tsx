@@ -5,7 +5,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { type Resolver, useForm } from 'react-hook-form';
 import { postJson } from '@/components/ui/post-json';
-import { changeRowSchema } from '@/lib/editions/schemas';
+import { changeRowSchema } from '@/lib/editions/form-schemas';
 import { HYDRATION_SCALES, PHASES, PROPERTIES, PROPERTY_CODES, type ReferenceValue } from '@/lib/reference/properties';
 
 export interface ValueEditorProps {

@@ -1,13 +1,8 @@
-import { z } from 'zod';
+// Sign-in and invitation schemas as the routes take them (classic zod, lib/validation/for-routes.ts).
+// The schemas themselves are in auth-forms.ts, which the browser's forms import.
+import * as forms from './auth-forms';
+import { forRoutes } from './for-routes';
 
-export const emailSchema = z.string().trim().toLowerCase().pipe(z.email('Enter a valid e-mail address').max(254));
-export const passwordSchema = z
-  .string()
-  .min(10, 'Use at least 10 characters')
-  .max(200, 'Use at most 200 characters');
-
-export const signInSchema = z.object({ email: emailSchema, password: z.string().min(1, 'Enter your password') });
-export const signInLinkSchema = z.object({ email: emailSchema });
-export const acceptInvitationSchema = z
-  .object({ token: z.string().min(10, 'The invitation link is incomplete'), password: passwordSchema, confirm: z.string() })
-  .refine((v) => v.password === v.confirm, { path: ['confirm'], message: 'The two passwords differ' });
+export { emailSchema, passwordSchema, signInSchema } from './auth-forms';
+export const signInLinkSchema = forRoutes(forms.signInLinkSchema);
+export const acceptInvitationSchema = forRoutes(forms.acceptInvitationSchema);
