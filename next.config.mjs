@@ -7,21 +7,13 @@
 // pages only ('self' + 'unsafe-inline'), never 'unsafe-eval' in production, forbid framing, plugins
 // and foreign form targets, and keep every fetch on our own origin.
 const isDev = process.env.NODE_ENV !== 'production';
-// Bench photos are shown through short-lived signed URLs on the object store (GET
-// /api/v1/photos/:id/image redirects there), so images may also come from the S3 endpoint's
-// origin. Read at build time: the start and test commands export S3_ENDPOINT before building.
-const photoOrigin = (() => {
-  try {
-    return process.env.S3_ENDPOINT ? new URL(process.env.S3_ENDPOINT).origin : '';
-  } catch {
-    return '';
-  }
-})();
+// Bench photos are served from our own origin (GET /api/v1/photos/:id/image), so images need no
+// foreign origin: 'self', data: and the blob: URLs of photos still on the device.
 const csp = [
   "default-src 'self'",
   `script-src 'self' 'unsafe-inline'${isDev ? " 'unsafe-eval'" : ''}`,
   "style-src 'self' 'unsafe-inline'",
-  `img-src 'self' data: blob:${photoOrigin ? ` ${photoOrigin}` : ''}`,
+  "img-src 'self' data: blob:",
   "font-src 'self'",
   "connect-src 'self'",
   "worker-src 'self'",

@@ -21,6 +21,14 @@ export function isOfflinePath(pathname: string): boolean {
   return pathname === '/' || OFFLINE_PREFIXES.some((p) => pathname === p || pathname.startsWith(`${p}/`));
 }
 
+/** Seen bench photos, kept for offline use; forgotten with the stored pages (sign-out, another user). */
+export const PHOTOS_CACHE = 'rungbook-photos';
+
+/** A bench photo's image (`/api/v1/photos/:id/image`, thumbnail or full). */
+export function isPhotoImage(pathname: string): boolean {
+  return /^\/api\/v1\/photos\/[0-9a-f-]{36}\/image$/i.test(pathname);
+}
+
 /** The cache key of a page: shells drop their query (one shell for every id), other pages keep it. */
 export function pageCacheKey(url: URL): string {
   const shell = (SHELL_PATHS as readonly string[]).includes(url.pathname);
@@ -43,7 +51,7 @@ export type PageToWorker =
    * user's id. A different owner than the cache's replaces every stored page first.
    */
   | { type: 'WARM_ROUTES'; owner: string; urls?: string[]; force?: boolean }
-  /** Drop every stored page (sign-out, or a different user on this device). */
+  /** Drop every stored page and seen photo (sign-out, or a different user on this device). */
   | { type: 'FORGET_PAGES' }
   | { type: 'GET_VERSION' };
 

@@ -4,9 +4,10 @@
 import { clientsClaim } from 'workbox-core';
 import { cleanupOutdatedCaches, matchPrecache, precacheAndRoute } from 'workbox-precaching';
 import { registerRoute, setCatchHandler } from 'workbox-routing';
-import { NetworkFirst, NetworkOnly } from 'workbox-strategies';
+import { ExpirationPlugin } from 'workbox-expiration';
+import { CacheFirst, NetworkFirst, NetworkOnly } from 'workbox-strategies';
 import type { WorkboxPlugin } from 'workbox-core/types';
-import { OFFLINE_URL, WARM_ROUTES, isOfflinePath, isRscRequest, pageCacheKey, type PageToWorker, type WorkerToPage } from './protocol';
+import { OFFLINE_URL, PHOTOS_CACHE, WARM_ROUTES, isOfflinePath, isPhotoImage, isRscRequest, pageCacheKey, type PageToWorker, type WorkerToPage } from './protocol';
 
 declare const self: ServiceWorkerGlobalScope & { __WB_MANIFEST: { url: string; revision: string | null }[] };
 // The Next.js build id, set by lib/ops/build-sw.ts.
@@ -20,6 +21,13 @@ const WARMED_AT_KEY = '/__rungbook/warmed-at';
 const REWARM_AFTER_MS = 10 * 60 * 1000;
 // Server-rendered record pages are stored as they are visited; keep the most recent ones.
 const MAX_STORED_PAGES = 150;
+// Bench photos seen on this device (thumbnails and full images), most recently used first.
+const MAX_STORED_PHOTOS = 400;
+
+/** Everything this device keeps of the signed-in user's site: the stored pages and the seen photos. */
+function forgetUserCaches(): Promise<unknown> {
+  return Promise.all([caches.delete(PAGES_CACHE), caches.delete(PHOTOS_CACHE)]);
+}
 
 // A new version waits until the user chooses to reload (SKIP_WAITING); the first install takes
 // control of open pages at once, so they work offline without a second visit.
@@ -39,7 +47,7 @@ registerRoute(({ request, url }) => isRscRequest(request.headers, url), new Netw
 registerRoute(
   ({ url }) => url.pathname === '/api/auth/signout',
   async ({ request }) => {
-    await caches.delete(PAGES_CACHE);
+    await forgetUserCaches();
     return fetch(request);
   },
   'POST',
@@ -59,7 +67,14 @@ const storeOnlyHtmlPages: WorkboxPlugin = {
 const floorPages = new NetworkFirst({ cacheName: PAGES_CACHE, networkTimeoutSeconds: 6, plugins: [storeOnlyHtmlPages] });
 registerRoute(({ request, url }) => request.mode === 'navigate' && url.origin === self.location.origin && isOfflinePath(url.pathname), floorPages);
 
-// 5. Every other navigation (sign-in, reconcile, admin, …): network only, offline page when offline.
+// 5. Bench photos: a photo's bytes never change (photo records are append-only), so one seen online
+// is kept and shown offline; only good answers (200) are stored, at most MAX_STORED_PHOTOS.
+registerRoute(
+  ({ request, url }) => request.method === 'GET' && url.origin === self.location.origin && isPhotoImage(url.pathname),
+  new CacheFirst({ cacheName: PHOTOS_CACHE, plugins: [new ExpirationPlugin({ maxEntries: MAX_STORED_PHOTOS, purgeOnQuotaError: true })] }),
+);
+
+// 6. Every other navigation (sign-in, reconcile, admin, …): network only, offline page when offline.
 registerRoute(({ request }) => request.mode === 'navigate', new NetworkOnly());
 
 setCatchHandler(async ({ request }) => (request.mode === 'navigate' ? offlinePage() : Response.error()));
@@ -95,7 +110,7 @@ async function readText(cache: Cache, key: string): Promise<string | null> {
 async function warmRoutes(owner: string, extra: string[], force: boolean): Promise<WorkerToPage> {
   let cache = await caches.open(PAGES_CACHE);
   if ((await readText(cache, OWNER_KEY)) !== owner) {
-    await caches.delete(PAGES_CACHE);
+    await forgetUserCaches();
     cache = await caches.open(PAGES_CACHE);
     await cache.put(OWNER_KEY, new Response(owner));
   } else if (!force && Date.now() - Number((await readText(cache, WARMED_AT_KEY)) ?? 0) < REWARM_AFTER_MS) {
@@ -134,7 +149,7 @@ self.addEventListener('message', (event) => {
       if (typeof data.owner === 'string' && data.owner) event.waitUntil(warmRoutes(data.owner, Array.isArray(data.urls) ? data.urls : [], data.force === true).then(reply));
       break;
     case 'FORGET_PAGES':
-      event.waitUntil(caches.delete(PAGES_CACHE).then(() => reply({ type: 'PAGES_FORGOTTEN' })));
+      event.waitUntil(forgetUserCaches().then(() => reply({ type: 'PAGES_FORGOTTEN' })));
       break;
     case 'GET_VERSION':
       reply({ type: 'VERSION', build: BUILD });

@@ -7,7 +7,7 @@ import sharp from 'sharp';
 import { DEMO } from '../support/http';
 import { closeDb, makeSite, outcomesOf, query } from '../support/db';
 import { startFakes, stopFakes, storedKeys, storedObject } from './bench-support';
-import { signInThroughForm, test, waitForControllingWorker, waitForStoredPages } from './pwa-support';
+import { serveOwnWorker, signInThroughForm, test, waitForControllingWorker, waitForStoredPages } from './pwa-support';
 
 test.afterAll(closeDb);
 
@@ -86,6 +86,7 @@ test('a note with a photo made offline syncs and appears, photo and all, on anot
 
   // Another device of the same site: a supervisor's tablet.
   const other = await browser.newContext({ viewport: { width: 768, height: 1024 }, hasTouch: true });
+  await serveOwnWorker(other);
   const tablet = await other.newPage();
   await signInThroughForm(tablet, DEMO.supervisor);
   await tablet.goto(`/bench?lot=${encodeURIComponent(lot)}`);
@@ -99,6 +100,18 @@ test('a note with a photo made offline syncs and appears, photo and all, on anot
   await expect(served).toHaveAttribute('data-source', 'server');
   await expect.poll(() => served.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 15_000 }).toBeGreaterThan(1000);
   await expect(tablet.getByText('Drum 4 label')).toBeVisible();
+  // Once seen online (through the service worker), the photo shows on this tablet offline too.
+  await waitForControllingWorker(tablet);
+  await tablet.reload();
+  await expect.poll(() => served.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 15_000 }).toBeGreaterThan(1000);
+  const seenPhotos = () => tablet.evaluate(async () => ((await caches.has('rungbook-photos')) ? (await (await caches.open('rungbook-photos')).keys()).map((r) => new URL(r.url).pathname) : []));
+  await expect.poll(seenPhotos).toContain(`/api/v1/photos/${photoId}/image`);
+  const entryUrl = tablet.url();
+  await other.setOffline(true);
+  await tablet.goto(entryUrl);
+  await expect(tablet.getByTestId('entry-note')).toHaveText(note);
+  await expect.poll(() => served.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth), { timeout: 15_000 }).toBeGreaterThan(1000);
+  await other.setOffline(false);
   // Search finds it by a tag and by words of the note.
   await tablet.goto('/bench');
   await tablet.getByLabel('Search the bench log').fill(`#dissolver ${lot.toLowerCase()} seal`);
@@ -110,6 +123,10 @@ test('a note with a photo made offline syncs and appears, photo and all, on anot
   await tablet.getByRole('link', { name: `Start calorimetry sheet for lot ${lot}` }).click();
   await expect(tablet).toHaveURL(/\/sheets\/new\?kind=calorimetry&lot=/);
   await expect(tablet.getByLabel('Lot or batch reference')).toHaveValue(lot);
+  // Signing out forgets the photos this tablet kept, with its stored pages.
+  await tablet.getByRole('button', { name: 'Sign out' }).first().click();
+  await expect(tablet).toHaveURL(/\/sign-in/);
+  expect(await seenPhotos()).toEqual([]);
   await other.close();
 });
 

@@ -1,6 +1,6 @@
 // Helpers for the PWA end-to-end tests (tests/e2e/pwa*.spec.ts).
 import { existsSync, readFileSync } from 'node:fs';
-import { test as base, expect, type Page } from '@playwright/test';
+import { test as base, expect, type BrowserContext, type Page } from '@playwright/test';
 import { DEMO_PASSWORD } from '../support/http';
 
 /**
@@ -8,15 +8,19 @@ import { DEMO_PASSWORD } from '../support/http';
  * is served the worker that lib/ops/build-sw.ts wrote for the build under test (same bytes it
  * copied to public/), so another slot's build cannot break this run. With one build, the two match.
  */
+export async function serveOwnWorker(context: BrowserContext) {
+  const own = `${process.env.NEXT_DIST_DIR ?? '.next'}/sw.js`;
+  if (existsSync(own)) {
+    const body = readFileSync(own, 'utf8');
+    await context.route('**/sw.js', (route) =>
+      route.fulfill({ status: 200, contentType: 'application/javascript', headers: { 'Cache-Control': 'no-cache', 'Service-Worker-Allowed': '/' }, body }),
+    );
+  }
+}
+
 export const test = base.extend({
   context: async ({ context }, provide) => {
-    const own = `${process.env.NEXT_DIST_DIR ?? '.next'}/sw.js`;
-    if (existsSync(own)) {
-      const body = readFileSync(own, 'utf8');
-      await context.route('**/sw.js', (route) =>
-        route.fulfill({ status: 200, contentType: 'application/javascript', headers: { 'Cache-Control': 'no-cache', 'Service-Worker-Allowed': '/' }, body }),
-      );
-    }
+    await serveOwnWorker(context);
     await provide(context);
   },
 });

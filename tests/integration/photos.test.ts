@@ -99,7 +99,7 @@ describe('storing a photo', () => {
     expect(audits).toHaveLength(1);
   });
 
-  it('serves a photo to users of its site only, through short-lived signed URLs', async () => {
+  it('serves a photo to users of its site only: its bytes from our origin, or a short-lived signed URL for integrations', async () => {
     const bytes = await jpegWithLocation(640, 480);
     const id = await photoRecord(tech, bytes);
     expect((await upload(tech, id, bytes)).status).toBe(201);
@@ -116,9 +116,19 @@ describe('storing a photo', () => {
     expect((await sharp(fetched).metadata()).exif).toBeUndefined();
     expect((await sharp(fetched).metadata()).width).toBe(640);
 
-    const redirect = await sup.client.raw(`/api/v1/photos/${id}/image?variant=thumb`);
-    expect(redirect.status).toBe(302);
-    expect(redirect.headers.get('location')).toContain(`/photos/${id}/thumb.jpg?`);
+    // The image route answers with the bytes from our own origin (tablets never need to reach the
+    // storage endpoint), the same bytes as stored, kept by the browser since they never change.
+    const full = await sup.client.raw(`/api/v1/photos/${id}/image?variant=full`);
+    expect(full.status).toBe(200);
+    expect(full.headers.get('content-type')).toBe('image/jpeg');
+    expect(full.headers.get('cache-control')).toBe('private, max-age=31536000, immutable');
+    expect(Buffer.from(await full.arrayBuffer()).equals(fetched)).toBe(true);
+    const thumb = await sup.client.raw(`/api/v1/photos/${id}/image?variant=thumb`);
+    expect(thumb.status).toBe(200);
+    expect(thumb.headers.get('content-type')).toBe('image/jpeg');
+    const thumbMeta = await sharp(Buffer.from(await thumb.arrayBuffer())).metadata();
+    expect(Math.max(thumbMeta.width!, thumbMeta.height!)).toBeLessThan(640);
+    expect(thumbMeta.exif).toBeUndefined();
 
     // A user of another site learns nothing: the same answer as for an id that does not exist.
     for (const path of [`/api/v1/photos/${id}`, `/api/v1/photos/${id}/image?variant=full`]) {
