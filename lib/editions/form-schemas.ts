@@ -85,6 +85,9 @@ export const changeRowSchema = z
       if (coordination !== null && (coordination < 1 || coordination > 12)) issue('coordination', 'coordination must be a whole number from 1 to 12');
       if (r.property === 'ionic_radius' && coordination === null) issue('coordination', 'an ionic radius needs its coordination number');
       if (r.property !== 'ionic_radius' && coordination !== null) issue('coordination', 'only ionic radii carry a coordination number');
+      // An unknown or over-long property code is already an issue of its own column; zod still runs
+      // this check on the rest of the row, so nothing below may assume a known code.
+      if (!Object.hasOwn(PROPERTIES, r.property)) return;
       if (r.action === 'remove') return;
       if (r.value === '') issue('value', 'value is required for action "set"');
       const kind = PROPERTIES[r.property].kind;

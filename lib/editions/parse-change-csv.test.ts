@@ -34,6 +34,18 @@ describe('parseChangeCsv', () => {
     ]);
   });
 
+  it('an over-long or unknown property code is a row error naming the column, never a crash', () => {
+    const long = 'enthalpy_of_formation_of_the_solid_at_298_kelvin';
+    const r = parseChangeCsv([HEADER, `set,CaO,cr,0,${long},,-634.9,,kJ/mol,,,s,no,`, 'set,CaO,cr,0,heat_of_everything,,-634.9,,kJ/mol,,,s,no,', 'remove,CaO,cr,0,x,,,,,,,,,'].join('\n'));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.errors.map((e) => [e.row, e.column])).toEqual([
+      [2, 'property'],
+      [3, 'property'],
+      [4, 'property'],
+    ]);
+  });
+
   it('quoted fields may hold commas and line breaks', () => {
     const r = parseChangeCsv(`${HEADER}\nset,CaO,cr,0,enthalpy_of_formation,,-634.9,,kJ/mol,,,"CRC Handbook, section 5","no","two\nlines"\n`);
     expect(r.ok).toBe(true);
