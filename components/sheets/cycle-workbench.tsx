@@ -40,7 +40,9 @@ export function CycleWorkbench({ form, onChange, build, unit, suggestions, locke
     return { ...g, arrows: g.arrows.map((a) => ({ ...a, overridden: marked.has(a.key) })) };
   }, [solved, form.convention, build.rows]);
   useMarkCommit(build);
-  const formulaError = errorFor(build.errors, 'formula');
+  // A new sheet starts empty: the formula's hint says what to type; "required" waits for a first keystroke.
+  const started = form.formula.trim() !== '';
+  const formulaError = started ? errorFor(build.errors, 'formula') : undefined;
   const unknownKey = form.unknown ?? build.stepKeys.find((s) => s.key.startsWith('lattice_enthalpy:'))?.key ?? '';
 
   return (
@@ -108,7 +110,7 @@ export function CycleWorkbench({ form, onChange, build, unit, suggestions, locke
         onChange={(v) => change({ ...form, basis: v })}
       />
 
-      <ResultPanel solved={solved} unit={unit} errors={build.errors.length} />
+      <ResultPanel solved={solved} unit={unit} errors={build.errors.length} started={started} />
 
       <section aria-labelledby="steps-heading" className="panel overflow-x-auto">
         <h2 id="steps-heading">Steps of the cycle</h2>
@@ -158,7 +160,17 @@ export function CycleWorkbench({ form, onChange, build, unit, suggestions, locke
   );
 }
 
-function ResultPanel({ solved, unit, errors }: { solved: SolvedCycle | null; unit: DisplayUnit; errors: number }) {
+function ResultPanel({ solved, unit, errors, started }: { solved: SolvedCycle | null; unit: DisplayUnit; errors: number; started: boolean }) {
+  if (!solved && !started) {
+    return (
+      <section aria-labelledby="result-heading" className="panel">
+        <h2 id="result-heading">Result</h2>
+        <p className="mt-1 text-sm" aria-live="polite">
+          Not solved yet — type the formula of the salt to begin.
+        </p>
+      </section>
+    );
+  }
   if (!solved) {
     return (
       <section aria-labelledby="result-heading" className="panel border-ember-500 bg-ember-50">

@@ -21,7 +21,9 @@ export interface DissolutionWorkbenchProps {
 export function DissolutionWorkbench({ defaults, onChange, build, unit, suggestions, locked }: DissolutionWorkbenchProps) {
   const { register, formState, watch } = useLiveForm(dissolutionFormSchema, defaults, onChange);
   useMarkCommit(build);
-  const err = (f: keyof DissolutionForm) => formState.errors[f]?.message ?? errorFor(build.errors, f);
+  // A new sheet starts empty: the formula's hint says what to type; "required" waits until the field is touched.
+  const started = (watch('formula') ?? '').trim() !== '' || formState.touchedFields.formula === true;
+  const err = (f: keyof DissolutionForm) => formState.errors[f]?.message ?? (f === 'formula' && !started ? undefined : errorFor(build.errors, f));
   const withBatch = watch('withBatch');
   const r = build.outcome?.kind === 'dissolution' ? build.outcome : null;
   return (
@@ -96,7 +98,7 @@ export function DissolutionWorkbench({ defaults, onChange, build, unit, suggesti
             ) : null}
           </>
         ) : (
-          <p className="text-sm">Not solved yet — see the messages above.</p>
+          <p className="text-sm">{started ? 'Not solved yet — see the messages above.' : 'Not solved yet — type the formula of the salt to begin.'}</p>
         )}
       </section>
 

@@ -11,7 +11,8 @@ const PHASE_TEXT: Record<string, string> = {
   idle: 'Up to date',
   pushing: 'Sending',
   pulling: 'Receiving',
-  offline: 'Offline',
+  // The offline state itself is said once, by the app-wide indicator (components/pwa); here, what it means for sync.
+  offline: 'sends when back online',
   signin_required: 'Sign in to sync',
   upgrade_required: 'Update needed',
   error: 'Sync paused',

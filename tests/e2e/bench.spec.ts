@@ -65,6 +65,10 @@ test('a note with a photo made offline syncs and appears, photo and all, on anot
   const photoId = await openedEntryPhotoId(page);
   const entryId = new URL(page.url()).searchParams.get('id')!;
   await expect(waiting(page)).toHaveText('2 waiting to sync');
+  // "Offline" is said once, by the app-wide indicator; the sync badge says what it means for sync.
+  await page.getByRole('button', { name: 'Sync now' }).click();
+  await expect(page.getByTestId('sync-status')).toContainText('sends when back online');
+  await expect(page.getByText(/\bOffline\b/)).toHaveCount(1);
 
   await context.setOffline(false);
   await page.getByRole('button', { name: 'Sync now' }).click();

@@ -125,6 +125,21 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   await sup.context().close();
 });
 
+test('a new sheet starts without error messages; a wrong formula then names what is wrong', async ({ browser }) => {
+  const page = await signedInPage(browser, await demoSiteUser('technician', 'Workbench new-sheet technician'));
+  await newSheet(page, 'cycle');
+  await expect(page.getByText('Not solved yet — type the formula of the salt to begin.')).toBeVisible();
+  await expect(page.getByRole('main').getByRole('alert')).toHaveCount(0);
+  await expect(page.getByLabel('Formula of the salt')).not.toHaveAttribute('aria-invalid', 'true');
+  await page.getByLabel('Formula of the salt').fill('Qq2');
+  await expect(page.getByRole('main').getByRole('alert').first()).toBeVisible();
+  await expect(page.getByLabel('Formula of the salt')).toHaveAttribute('aria-invalid', 'true');
+  await newSheet(page, 'dissolution');
+  await expect(page.getByText('Not solved yet — type the formula of the salt to begin.')).toBeVisible();
+  await expect(page.getByLabel('Salt (anhydrous or a hydrate)')).not.toHaveAttribute('aria-invalid', 'true');
+  await page.context().close();
+});
+
 test('the author of a sheet cannot sign it off, even as a supervisor', async ({ browser }) => {
   const page = await signedInPage(browser, await demoSiteUser('supervisor', 'Workbench shift supervisor'));
   await newSheet(page, 'cycle');
