@@ -1,13 +1,12 @@
 'use client';
 // Calorimetry sheet: a solution-calorimetry run reduced to ΔsolH, compared with the forms the
 // edition knows (anhydrous and hydrates), with the verdict on which form the lot is.
-import { errorFor } from '@/lib/workbench/field-error';
 import { calorimetryFormSchema, type CalorimetryForm } from '@/lib/workbench/calorimetry-sheet';
 import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { Field } from './field';
 import { useMarkCommit } from './perf-marks';
-import { useLiveForm } from './use-live-form';
+import { useFieldMessages, useLiveForm } from './use-live-form';
 
 export interface CalorimetryWorkbenchProps {
   defaults: CalorimetryForm;
@@ -19,9 +18,11 @@ export interface CalorimetryWorkbenchProps {
 }
 
 export function CalorimetryWorkbench({ defaults, onChange, build, unit, suggestions, locked }: CalorimetryWorkbenchProps) {
-  const { register, formState, watch } = useLiveForm(calorimetryFormSchema, defaults, onChange);
+  const form = useLiveForm(calorimetryFormSchema, defaults, onChange);
+  const { register, watch } = form;
   useMarkCommit(build);
-  const err = (f: keyof CalorimetryForm) => formState.errors[f]?.message ?? errorFor(build.errors, f);
+  const { err: message, waiting } = useFieldMessages(form, build.errors);
+  const err = (f: keyof CalorimetryForm) => message(f);
   const mode = watch('mode');
   const r = build.outcome?.kind === 'calorimetry' ? build.outcome.result : null;
   return (
@@ -148,7 +149,7 @@ export function CalorimetryWorkbench({ defaults, onChange, build, unit, suggesti
             </ul>
           </>
         ) : (
-          <p className="text-sm">Not solved yet — see the messages above.</p>
+          <p className="text-sm">{waiting ? 'Not solved yet — fill in the run above to begin.' : 'Not solved yet — see the messages above.'}</p>
         )}
       </section>
     </fieldset>

@@ -1,13 +1,12 @@
 'use client';
 // Dissolution and batch heat: ΔsolH (primary route) and its lattice + hydration decomposition;
 // batch inputs; heat released, final temperature, a warning before boiling; cautions beside them.
-import { errorFor } from '@/lib/workbench/field-error';
 import { dissolutionFormSchema, type DissolutionForm, type SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { Cautions } from './cautions';
 import { Field } from './field';
 import { useMarkCommit } from './perf-marks';
-import { useLiveForm } from './use-live-form';
+import { useFieldMessages, useLiveForm } from './use-live-form';
 
 export interface DissolutionWorkbenchProps {
   defaults: DissolutionForm;
@@ -19,11 +18,11 @@ export interface DissolutionWorkbenchProps {
 }
 
 export function DissolutionWorkbench({ defaults, onChange, build, unit, suggestions, locked }: DissolutionWorkbenchProps) {
-  const { register, formState, watch } = useLiveForm(dissolutionFormSchema, defaults, onChange);
+  const form = useLiveForm(dissolutionFormSchema, defaults, onChange);
+  const { register, watch } = form;
   useMarkCommit(build);
-  // A new sheet starts empty: the formula's hint says what to type; "required" waits until the field is touched.
-  const started = (watch('formula') ?? '').trim() !== '' || formState.touchedFields.formula === true;
-  const err = (f: keyof DissolutionForm) => formState.errors[f]?.message ?? (f === 'formula' && !started ? undefined : errorFor(build.errors, f));
+  const { err: message, waiting } = useFieldMessages(form, build.errors);
+  const err = (f: keyof DissolutionForm) => message(f);
   const withBatch = watch('withBatch');
   const r = build.outcome?.kind === 'dissolution' ? build.outcome : null;
   return (
@@ -98,7 +97,7 @@ export function DissolutionWorkbench({ defaults, onChange, build, unit, suggesti
             ) : null}
           </>
         ) : (
-          <p className="text-sm">{started ? 'Not solved yet — see the messages above.' : 'Not solved yet — type the formula of the salt to begin.'}</p>
+          <p className="text-sm">{waiting ? 'Not solved yet — type the formula of the salt to begin.' : 'Not solved yet — see the messages above.'}</p>
         )}
       </section>
 

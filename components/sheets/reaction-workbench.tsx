@@ -10,7 +10,7 @@ import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { Cautions } from './cautions';
 import { Field } from './field';
 import { useMarkCommit } from './perf-marks';
-import { useLiveForm } from './use-live-form';
+import { useFieldMessages, useLiveForm } from './use-live-form';
 
 export interface ReactionWorkbenchProps {
   defaults: ReactionForm;
@@ -21,9 +21,10 @@ export interface ReactionWorkbenchProps {
 }
 
 export function ReactionWorkbench({ defaults, onChange, build, unit, locked }: ReactionWorkbenchProps) {
-  const { register, formState, control, watch } = useLiveForm(reactionFormSchema, defaults, onChange);
+  const form = useLiveForm(reactionFormSchema, defaults, onChange);
+  const { register, control, watch } = form;
   useMarkCommit(build);
-  const err = (f: string) => (formState.errors as Record<string, { message?: string } | undefined>)[f]?.message ?? errorFor(build.errors, f);
+  const { err, waiting } = useFieldMessages(form, build.errors);
   const r = build.outcome?.kind === 'reaction' ? build.outcome.result : null;
   const parsed = reactionTerms(watch('reaction'));
   const terms = parsed ? [...parsed.reactants, ...parsed.products] : [];
@@ -117,7 +118,7 @@ export function ReactionWorkbench({ defaults, onChange, build, unit, locked }: R
             </ul>
           </>
         ) : (
-          <p className="text-sm">Not solved yet — see the messages above.</p>
+          <p className="text-sm">{waiting ? 'Not solved yet — write the reaction to begin.' : 'Not solved yet — see the messages above.'}</p>
         )}
       </section>
       {r?.batch || fluorideInAcid ? (

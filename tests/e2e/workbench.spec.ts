@@ -125,7 +125,7 @@ test('a cycle sheet: override with a reason, solve for an electron affinity, swi
   await sup.context().close();
 });
 
-test('a new sheet starts without error messages; a wrong formula then names what is wrong', async ({ browser }) => {
+test('a new sheet of any kind starts without error messages; a wrong formula then names what is wrong', async ({ browser }) => {
   const page = await signedInPage(browser, await demoSiteUser('technician', 'Workbench new-sheet technician'));
   await newSheet(page, 'cycle');
   await expect(page.getByText('Not solved yet — type the formula of the salt to begin.')).toBeVisible();
@@ -137,6 +137,13 @@ test('a new sheet starts without error messages; a wrong formula then names what
   await newSheet(page, 'dissolution');
   await expect(page.getByText('Not solved yet — type the formula of the salt to begin.')).toBeVisible();
   await expect(page.getByLabel('Salt (anhydrous or a hydrate)')).not.toHaveAttribute('aria-invalid', 'true');
+  await expect(page.getByRole('main').getByRole('alert')).toHaveCount(0);
+  await newSheet(page, 'reaction');
+  await expect(page.getByText('Not solved yet — write the reaction to begin.')).toBeVisible();
+  await expect(page.getByRole('main').getByRole('alert')).toHaveCount(0);
+  await newSheet(page, 'calorimetry');
+  await expect(page.getByText('Not solved yet — fill in the run above to begin.')).toBeVisible();
+  await expect(page.getByRole('main').getByRole('alert')).toHaveCount(0);
   await page.context().close();
 });
 
