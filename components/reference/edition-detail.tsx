@@ -33,7 +33,7 @@ export function EditionDetail({ editionId, userId, canApprove }: EditionDetailPr
   const [picked, setPicked] = useState<ReferenceValue | null>(null);
 
   const step = useMutation({
-    mutationFn: async (v: { action: 'submit' | 'approve' | 'rebase' | 'reject'; body?: unknown }) => {
+    mutationFn: async (v: { action: 'submit' | 'approve' | 'rebase' | 'reject' | 'withdraw' | 'discard'; body?: unknown }) => {
       const res = await postJson<{ carried?: number; conflicts?: { key: string }[] }>(`/api/v1/editions/${editionId}/${v.action}`, v.body ?? {});
       if (!res.ok) throw new Error(res.message);
       return { action: v.action, data: res.data };
@@ -43,6 +43,8 @@ export function EditionDetail({ editionId, userId, canApprove }: EditionDetailPr
         action === 'submit' ? 'Submitted for review; the supervisors have been e-mailed.'
         : action === 'approve' ? 'Approved: this edition is now in force, and the site has been e-mailed.'
         : action === 'reject' ? 'Sent back to draft with your reason.'
+        : action === 'withdraw' ? 'Withdrawn from review: it is a draft again, yours to change.'
+        : action === 'discard' ? 'Discarded: kept here, readable, but it can no longer be submitted.'
         : `Rebased: ${data.carried} change(s) carried onto the edition in force.` +
           (data.conflicts?.length ? ` ${data.conflicts.length} value(s) had also changed there; this draft's value was kept: ${data.conflicts.map((c) => c.key.split('|').slice(0, 3).join(' ')).join('; ')}.` : '');
       setNote({ kind: 'ok', text });
@@ -153,7 +155,15 @@ export function EditionDetail({ editionId, userId, canApprove }: EditionDetailPr
       ) : null}
 
       {e.state === 'in_review' && canApprove && !isAuthor ? <ReviewPanel number={e.number} busy={step.isPending} onApprove={() => step.mutate({ action: 'approve' })} onReject={(reason) => step.mutate({ action: 'reject', body: { reason } })} /> : null}
-      {e.state === 'in_review' && isAuthor ? <p className="text-sm text-ink-soft">Waiting for a supervisor other than you to review it.</p> : null}
+      {e.state === 'in_review' && isAuthor ? (
+        <div className="panel space-y-2">
+          <p className="text-sm text-ink-soft">Waiting for a supervisor other than you to review it. To change it first, take it back out of review.</p>
+          <button type="button" className="btn-quiet" disabled={step.isPending} onClick={() => step.mutate({ action: 'withdraw' })}>
+            Withdraw edition No. {e.number} from review
+          </button>
+        </div>
+      ) : null}
+      {e.state === 'draft' && (isAuthor || canApprove) ? <DiscardPanel number={e.number} busy={step.isPending} onDiscard={() => step.mutate({ action: 'discard' })} /> : null}
 
       {e.baseEditionId ? (
         <section aria-labelledby="changes-title" className="panel space-y-2">
@@ -218,6 +228,31 @@ function SummaryPanel({ edition, editable, onSaved }: { edition: EditionInfo; ed
         </p>
       ) : null}
     </form>
+  );
+}
+
+/** Two steps, so a draft is never discarded by a stray tap. */
+function DiscardPanel({ number, busy, onDiscard }: { number: number; busy: boolean; onDiscard: () => void }) {
+  const [asking, setAsking] = useState(false);
+  return (
+    <div className="panel space-y-2">
+      <h2>Discard this draft</h2>
+      <p className="text-sm text-ink-soft">Edition No. {number} stays listed and readable, with its values and history, but it can never be submitted or changed again.</p>
+      {asking ? (
+        <div className="flex flex-wrap gap-2">
+          <button type="button" className="btn-danger" disabled={busy} onClick={onDiscard}>
+            Yes, discard edition No. {number}
+          </button>
+          <button type="button" className="btn-quiet" onClick={() => setAsking(false)}>
+            Keep it
+          </button>
+        </div>
+      ) : (
+        <button type="button" className="btn-quiet" onClick={() => setAsking(true)}>
+          Discard edition No. {number}…
+        </button>
+      )}
+    </div>
   );
 }
 

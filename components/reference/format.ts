@@ -12,6 +12,7 @@ export const STATE_LABEL: Record<EditionState, string> = {
   in_review: 'In review',
   in_force: 'In force',
   retired: 'Retired',
+  discarded: 'Discarded',
 };
 
 export function propertyLabel(code: string): string {

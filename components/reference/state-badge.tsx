@@ -9,6 +9,7 @@ const STYLE: Record<EditionState, string> = {
   in_review: 'border-brine-500 text-brine-700',
   in_force: 'border-verdigris-500 bg-verdigris-50 text-verdigris-700 font-semibold',
   retired: 'border-rule text-ink-soft',
+  discarded: 'border-dashed border-rule text-ink-soft line-through',
 };
 
 /** The state as words (never by colour alone). */

@@ -120,6 +120,36 @@ export async function applyChanges(
   return options.apply ? inSiteLock(actor.siteId, work) : db().transaction(work);
 }
 
+/**
+ * Give up a draft: it becomes `discarded` — kept with its values and history (readable forever,
+ * its number never reused), but never submitted, changed or in force. Its author may discard it, or
+ * a supervisor (a draft left behind by someone who moved on).
+ */
+export async function discardDraft(actor: UserActor, editionId: string): Promise<Edition> {
+  return inSiteLock(actor.siteId, async (tx) => {
+    const e = await getEditionOrThrow(actor.siteId, editionId, tx);
+    if (e.authorUserId !== actor.userId && !can(actor.role, 'edition.approve')) {
+      throw new AppError('forbidden', `Only the author of edition No. ${e.number} or a supervisor may discard it.`);
+    }
+    requireState(e, ['draft'], 'discarded');
+    await tx.update(editions).set({ state: 'discarded', updatedAt: new Date() }).where(eq(editions.id, e.id));
+    await audit(tx, actor, { action: 'edition.discarded', entityType: 'edition', entityId: e.id, before: { state: 'draft' }, after: { state: 'discarded' } });
+    return getEditionOrThrow(actor.siteId, e.id, tx);
+  });
+}
+
+/** Take an edition back out of review (its author, before anyone approves it): it is a draft again. */
+export async function withdrawFromReview(actor: UserActor, editionId: string): Promise<Edition> {
+  return inSiteLock(actor.siteId, async (tx) => {
+    const e = await getEditionOrThrow(actor.siteId, editionId, tx);
+    requireAuthor(actor, e, 'withdraw');
+    requireState(e, ['in_review'], 'withdrawn');
+    await tx.update(editions).set({ state: 'draft', submittedAt: null, updatedAt: new Date() }).where(eq(editions.id, e.id));
+    await audit(tx, actor, { action: 'edition.withdrawn', entityType: 'edition', entityId: e.id, before: { state: 'in_review' }, after: { state: 'draft' } });
+    return getEditionOrThrow(actor.siteId, e.id, tx);
+  });
+}
+
 export async function submitForReview(actor: UserActor, editionId: string): Promise<Edition> {
   return inSiteLock(actor.siteId, async (tx) => {
     const e = await getEditionOrThrow(actor.siteId, editionId, tx);

@@ -15,7 +15,8 @@ import { sites, users } from './foundation';
 
 // Reference editions (design.md §5): versioned, per-site sets of reference values.
 
-export const EDITION_STATES = ['draft', 'in_review', 'in_force', 'retired'] as const;
+// 'discarded': a draft its author (or a supervisor) gave up; kept, readable, never in force again.
+export const EDITION_STATES = ['draft', 'in_review', 'in_force', 'retired', 'discarded'] as const;
 export type EditionState = (typeof EDITION_STATES)[number];
 export const VALUE_PHASES = ['cr', 'l', 'g', 'aq'] as const;
 export const VALUE_SCALES = ['conventional', 'absolute'] as const;

@@ -118,6 +118,28 @@ test('a draft is made, filled from a CSV (a bad file changes nothing), submitted
   await supervisor.close();
 });
 
+test('a draft is discarded in two steps (a stray tap does nothing) and stays listed as discarded', async ({ page }) => {
+  const site = await makeSite('ed-discard');
+  await signIn(page, site.users.technician.email, site.password);
+  await page.goto('/editions');
+  await page.getByRole('button', { name: 'Start a new draft' }).click();
+  await expect(page.getByRole('heading', { name: 'Edition No. 1' })).toBeVisible();
+  await page.getByLabel(/What this edition changes/).fill('A start that will be given up.');
+  await page.getByRole('button', { name: 'Save the summary' }).click();
+  await expect(page.getByText('Summary saved.')).toBeVisible();
+  await page.getByRole('button', { name: 'Discard edition No. 1…' }).click();
+  await page.getByRole('button', { name: 'Keep it' }).click();
+  await expect(page.getByText('Draft', { exact: true })).toBeVisible();
+  await page.getByRole('button', { name: 'Discard edition No. 1…' }).click();
+  await page.getByRole('button', { name: 'Yes, discard edition No. 1' }).click();
+  await expect(page.getByText(/Discarded: kept here, readable/)).toBeVisible();
+  await expect(page.getByText('Discarded', { exact: true })).toBeVisible();
+  await expect(page.getByRole('button', { name: /Submit edition No. 1/ })).toHaveCount(0);
+  await page.goto('/editions');
+  await expect(page.getByText('Discarded', { exact: true })).toBeVisible();
+  await expectNoSeriousA11yIssues(page);
+});
+
 pwaTest('the Reference screen reads the device’s copy of the edition in force, so it works offline', async ({ page, context }) => {
   await signIn(page, DEMO.qcTechnician);
   await page.goto('/reference');

@@ -374,6 +374,40 @@ describe('the edition workflow, per role', () => {
     expect(submit.status).toBe(422);
     expect(submit.body.error.fields[0]!.field).toBe('changeSummary');
   });
+
+  it('its author takes an edition back out of review; a draft is discarded by its author or a supervisor, and kept readable', async () => {
+    const d = (await tech.post<{ edition: EditionBody }>('/api/v1/editions', { changeSummary: 'Second thoughts.' })).body.edition;
+    expect((await tech.post<{ edition: EditionBody }>(`/api/v1/editions/${d.id}/submit`)).body.edition.state).toBe('in_review');
+    const bySup = await sup.post<ErrorBody>(`/api/v1/editions/${d.id}/withdraw`);
+    expect(bySup.status).toBe(403);
+    const back = await tech.post<{ edition: EditionBody }>(`/api/v1/editions/${d.id}/withdraw`);
+    expect(back.status).toBe(200);
+    expect(back.body.edition).toMatchObject({ state: 'draft', submittedAt: null });
+    expect((await tech.post<ErrorBody>(`/api/v1/editions/${d.id}/withdraw`)).status).toBe(409);
+
+    // A technician may not discard a supervisor's draft; a supervisor may discard the technician's.
+    const supDraft = (await sup.post<{ edition: EditionBody }>('/api/v1/editions', { changeSummary: 'a supervisor draft' })).body.edition;
+    const notYours = await tech.post<ErrorBody>(`/api/v1/editions/${supDraft.id}/discard`);
+    expect(notYours.status).toBe(403);
+    expect(notYours.body.error.message).toMatch(/author.*or a supervisor/);
+    const gone = await sup.post<{ edition: EditionBody }>(`/api/v1/editions/${d.id}/discard`);
+    expect(gone.status).toBe(200);
+    expect(gone.body.edition.state).toBe('discarded');
+    const mine = await sup.post<{ edition: EditionBody }>(`/api/v1/editions/${supDraft.id}/discard`);
+    expect(mine.body.edition.state).toBe('discarded');
+    // Kept and readable, its number not reused; never submitted or changed again.
+    const read = await tech.get<{ edition: EditionBody; values: unknown[] }>(`/api/v1/editions/${d.id}`);
+    expect(read.status).toBe(200);
+    expect(read.body.values.length).toBe(d.valueCount);
+    const resubmit = await tech.post<ErrorBody>(`/api/v1/editions/${d.id}/submit`);
+    expect(resubmit.status).toBe(409);
+    expect(resubmit.body.error.message).toMatch(/discarded/);
+    expect((await tech.post<ErrorBody>(`/api/v1/editions/${d.id}/discard`)).status).toBe(409);
+    const next = (await tech.post<{ edition: EditionBody }>('/api/v1/editions', { changeSummary: 'after the discards' })).body.edition;
+    expect(next.number).toBeGreaterThan(Math.max(d.number, supDraft.number));
+    const audits = await query<{ action: string }>("SELECT action FROM audit_log WHERE entity_id = ? AND action IN ('edition.withdrawn', 'edition.discarded')", [d.id]);
+    expect(audits.map((a) => a.action).sort()).toEqual(['edition.discarded', 'edition.withdrawn']);
+  });
 });
 
 describe('CSV import into a draft', () => {

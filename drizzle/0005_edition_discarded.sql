@@ -1,0 +1,1 @@
+ALTER TABLE `editions` MODIFY COLUMN `state` enum('draft','in_review','in_force','retired','discarded') NOT NULL;
