@@ -93,16 +93,8 @@ function ionText(symbol: string, charge: number): string {
 /** Gaseous diatomic non-metals; Br2 is liquid and I2 solid at 298 K; S and Se solids atomize directly. */
 const DIATOMIC_GAS = new Set(['F', 'Cl', 'O', 'N']);
 
-interface StepSpec {
-  key: string;
-  kind: CycleStepKind;
-  name: string;
-  property: PropertyCode | null;
-  species: string;
-  phase: Phase;
-  process: string;
-  coefficient: Dec;
-  basisCorrection: Dec;
+/** A step before its value is looked up: the fields of CycleStep that do not depend on the value. */
+interface StepSpec extends Pick<CycleStep, 'key' | 'kind' | 'name' | 'property' | 'species' | 'phase' | 'process' | 'coefficient' | 'basisCorrection'> {
   /** Extra lookups tried in turn when the first finds nothing (e.g. ΔfH of the gaseous atom). */
   fallbacks?: Array<{ species: string; phase: Phase; property: PropertyCode }>;
 }
