@@ -1,5 +1,5 @@
 import 'server-only';
-import { DeleteObjectsCommand, PutObjectCommand } from '@aws-sdk/client-s3';
+import { DeleteObjectsCommand, GetObjectCommand, NoSuchKey, PutObjectCommand } from '@aws-sdk/client-s3';
 import { bucket, ensureBucket, objectStore } from '@/lib/storage/object-store';
 import { AppError } from '@/lib/server/errors';
 import { log } from '@/lib/server/log';
@@ -22,5 +22,24 @@ export async function storePhotoObjects(keys: PhotoKeys, photo: ProcessedPhoto, 
     log.warn({ err: error, photoId: meta.photoId }, 'photo upload: object storage failed');
     await s3.send(new DeleteObjectsCommand({ Bucket: bucket(), Delete: { Objects: [{ Key: keys.original }, { Key: keys.thumbnail }], Quiet: true } })).catch(() => undefined);
     throw new AppError('unavailable', STORAGE_UNAVAILABLE);
+  }
+}
+
+/**
+ * Read one stored image (the photo or its thumbnail) as a stream with its type and length. A missing
+ * object where the record says stored is logged and answers 404; storage trouble answers 503.
+ */
+export async function readPhotoObject(key: string, photoId: string): Promise<{ body: ReadableStream; contentType: string | undefined; length: number | undefined }> {
+  try {
+    const object = await objectStore().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+    if (!object.Body) throw new Error('object storage answered without a body');
+    return { body: object.Body.transformToWebStream(), contentType: object.ContentType, length: object.ContentLength };
+  } catch (error) {
+    if (error instanceof NoSuchKey) {
+      log.error({ photoId, key }, 'photo image: the record says stored, the object is missing');
+      throw new AppError('not_found', 'The stored image of this photo is missing; it has been logged.');
+    }
+    log.warn({ err: error, photoId }, 'photo image: object storage could not be read');
+    throw new AppError('unavailable', 'Photo storage cannot be reached just now; try again shortly.');
   }
 }

@@ -4,15 +4,13 @@
 // Rungbook (never the storage endpoint), and the service worker can keep the photos a user has seen
 // for offline use. A photo record is append-only, so its bytes never change: the answer may be kept.
 // Integrations that want to fetch from storage directly get a signed URL from GET /api/v1/photos/:id.
-import { GetObjectCommand, NoSuchKey } from '@aws-sdk/client-s3';
 import { z } from 'zod';
 import { getPhotoOrThrow } from '@/db/access/photos';
 import { photoKeys } from '@/lib/photos/photo-keys';
+import { readPhotoObject } from '@/lib/photos/store-photo';
 import { recordIdSchema } from '@/lib/sheets/sheet-schema';
 import { AppError } from '@/lib/server/errors';
-import { log } from '@/lib/server/log';
 import { route } from '@/lib/server/route';
-import { bucket, objectStore } from '@/lib/storage/object-store';
 
 export const runtime = 'nodejs';
 
@@ -25,24 +23,12 @@ export const GET = route({ requires: 'site.read' }, async ({ actor, params, quer
   const photo = await getPhotoOrThrow(actor.siteId, id.data.toLowerCase());
   if (!photo.blobStoredAt) throw new AppError('not_found', 'This photo has not been uploaded yet: it arrives when the device that took it syncs.', { waiting: true });
   const keys = photoKeys(actor.siteId, photo.id, photo.meta.contentType);
-  const key = variant === 'thumb' ? keys.thumbnail : keys.original;
-  let object;
-  try {
-    object = await objectStore().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
-  } catch (error) {
-    if (error instanceof NoSuchKey) {
-      log.error({ photoId: photo.id, key }, 'photo image: the record says stored, the object is missing');
-      throw new AppError('not_found', 'The stored image of this photo is missing; it has been logged.');
-    }
-    log.warn({ err: error, photoId: photo.id }, 'photo image: object storage could not be read');
-    throw new AppError('unavailable', 'Photo storage cannot be reached just now; try again shortly.');
-  }
-  if (!object.Body) throw new AppError('unavailable', 'Photo storage answered without the image; try again shortly.');
-  return new Response(object.Body.transformToWebStream(), {
+  const image = await readPhotoObject(variant === 'thumb' ? keys.thumbnail : keys.original, photo.id);
+  return new Response(image.body, {
     status: 200,
     headers: {
-      'Content-Type': object.ContentType ?? (variant === 'thumb' ? 'image/jpeg' : photo.meta.contentType),
-      ...(object.ContentLength !== undefined ? { 'Content-Length': String(object.ContentLength) } : {}),
+      'Content-Type': image.contentType ?? (variant === 'thumb' ? 'image/jpeg' : photo.meta.contentType),
+      ...(image.length !== undefined ? { 'Content-Length': String(image.length) } : {}),
       'Cache-Control': 'private, max-age=31536000, immutable',
       'X-Content-Type-Options': 'nosniff',
     },
