@@ -17,6 +17,9 @@ export function pool(): mysql.Pool {
     dateStrings: false,
     supportBigNumbers: true,
     decimalNumbers: false,
+    // Prepared statements (the sync writes, db/access/sync-records.ts) kept per connection, LRU:
+    // 20 connections × 100 stays far below the server's max_prepared_stmt_count (16,382).
+    maxPreparedStatements: 100,
   });
   return g.rungbookPool;
 }

@@ -15,7 +15,7 @@ import { sameJson } from '@/lib/sync/canonical-json';
 import { decideMutation } from '@/lib/sync/decide-mutation';
 import { ENTITY_SCHEMAS, type Entity, type Mutation, type MutationOutcome, type PushRequest } from '@/lib/sync/protocol';
 import { detectDrift, EditionContext, solveSheet, type DriftInfo } from './sync-drift';
-import { insertChanges, loadRecords, toServerRecord, upsertRecords, type ChangeRow, type RecordRow } from './sync-records';
+import { insertChanges, loadRecords, placeholders, toServerRecord, upsertRecords, type ChangeRow, type RecordRow } from './sync-records';
 import { isTransientDbError, SiteSequence, withSyncTransaction } from './sync-sequence';
 
 type Fields = { field: string; message: string }[];
@@ -64,7 +64,8 @@ export async function applyPush(actor: UserActor, req: PushRequest): Promise<Mut
 
   const prepared = req.mutations.map(prepare);
   const editions = new EditionContext(actor.siteId);
-  const siteAreas = await loadAreaIds(actor.siteId);
+  // The site's areas, read only when some change names one.
+  const siteAreas = prepared.some((p) => p.ok && typeof p.content.areaId === 'string') ? await loadAreaIds(actor.siteId) : new Set<string>();
   // Drift needs the editions; look them up before the transaction (read-only, cached per batch).
   const drift = new Map<string, DriftInfo | null>();
   for (const p of prepared) {
@@ -152,7 +153,7 @@ async function runBatch(
   // waits here and then sees the first one's outcomes (duplicate), never a half state.
   const seq = await SiteSequence.lock(conn, actor.siteId);
   const ids = req.mutations.map((m) => m.mutationId);
-  const [prior] = await conn.query(PRIOR_OUTCOMES_SQL, [ids.length ? ids : [''], ids.length ? ids : ['']]);
+  const [prior] = ids.length ? await conn.execute(priorOutcomesSql(ids.length), [...ids, ...ids]) : [[]];
   const priorById = new Map((prior as Record<string, unknown>[]).map((r) => [String(r.mutation_id), r]));
 
   const records = new Map<string, RecordRow>();
@@ -227,9 +228,9 @@ async function runBatch(
  * committed in the same transaction as the record); every other outcome (a conflict, a rejection,
  * an applied no-op) has its own row in sync_mutations.
  */
-const PRIOR_OUTCOMES_SQL = `SELECT mutation_id, site_id, user_id, entity, record_id, status, revision, conflict_id, reason FROM sync_mutations WHERE mutation_id IN (?)
+const priorOutcomesSql = (n: number) => `SELECT mutation_id, site_id, user_id, entity, record_id, status, revision, conflict_id, reason FROM sync_mutations WHERE mutation_id IN (${placeholders(n)})
   UNION ALL
-  SELECT mutation_id, site_id, actor_user_id, entity, record_id, 'applied', revision, NULL, NULL FROM sync_changes WHERE mutation_id IN (?) AND cause = 'mutation'`;
+  SELECT mutation_id, site_id, actor_user_id, entity, record_id, 'applied', revision, NULL, NULL FROM sync_changes WHERE mutation_id IN (${placeholders(n)}) AND cause = 'mutation'`;
 
 function recordOutcome(st: BatchState, actor: UserActor, deviceId: string, m: Mutation, o: MutationOutcome, now: Date) {
   if (o.status === 'retry') return;

@@ -1,5 +1,5 @@
 import 'server-only';
-import type { PoolConnection } from 'mysql2/promise';
+import type { ExecuteValues, PoolConnection } from 'mysql2/promise';
 import type { BenchEntry, PhotoMeta } from '@/lib/bench/bench-entry-schema';
 import type { Sheet } from '@/lib/sheets/sheet-schema';
 import type { Entity, ServerRecord } from '@/lib/sync/protocol';
@@ -36,6 +36,32 @@ function fromDb(entity: Entity, r: Record<string, unknown>): RecordRow {
   };
 }
 
+/**
+ * `?` placeholders for a prepared multi-row statement: `(?, ?), (?, ?)` for rows × cols, or
+ * `?, ?, ?` for an IN list (cols 0). The sync writes and lookups run as prepared statements
+ * (`execute`, the binary protocol): the values travel as they are, with no SQL text to escape on
+ * our side and none to parse on the server's, which is most of a big batch's cost. mysql2 keeps each
+ * statement per connection, LRU-bounded by the pool's `maxPreparedStatements` (db/client.ts).
+ */
+export function placeholders(rows: number, cols = 0): string {
+  const key = `${rows}x${cols}`;
+  let text = PLACEHOLDERS.get(key);
+  if (!text) {
+    text = cols === 0 ? Array<string>(rows).fill('?').join(', ') : Array<string>(rows).fill(`(${Array<string>(cols).fill('?').join(', ')})`).join(', ');
+    if (PLACEHOLDERS.size > 2000) PLACEHOLDERS.clear();
+    PLACEHOLDERS.set(key, text);
+  }
+  return text;
+}
+const PLACEHOLDERS = new Map<string, string>();
+
+/** A prepared statement's values, row after row; undefined → NULL, as the text protocol treats it. */
+function bind(rows: unknown[][]): ExecuteValues[] {
+  const out: ExecuteValues[] = [];
+  for (const row of rows) for (const v of row) out.push(v === undefined ? null : (v as ExecuteValues));
+  return out;
+}
+
 /** Load records by id (any site: the caller refuses another site's), optionally locking them. */
 export async function loadRecords(conn: PoolConnection, entity: Entity, ids: string[], forUpdate: boolean): Promise<Map<string, RecordRow>> {
   const out = new Map<string, RecordRow>();
@@ -43,9 +69,9 @@ export async function loadRecords(conn: PoolConnection, entity: Entity, ids: str
   const cols = entity === 'sheet' ? ', server_result, result_differs' : '';
   for (let i = 0; i < ids.length; i += 1000) {
     const chunk = ids.slice(i, i + 1000);
-    const [rows] = await conn.query(
-      `SELECT id, site_id, author_id, content, revision, last_seq, awaiting_review${cols} FROM ${TABLE[entity]} WHERE id IN (?)${forUpdate ? ' FOR UPDATE' : ''}`,
-      [chunk],
+    const [rows] = await conn.execute(
+      `SELECT id, site_id, author_id, content, revision, last_seq, awaiting_review${cols} FROM ${TABLE[entity]} WHERE id IN (${placeholders(chunk.length)})${forUpdate ? ' FOR UPDATE' : ''}`,
+      chunk,
     );
     for (const r of rows as Record<string, unknown>[]) out.set(String(r.id), fromDb(entity, r));
   }
@@ -76,30 +102,30 @@ export async function upsertRecords(conn: PoolConnection, rows: RecordRow[], now
           const s = r.content as Sheet;
           return [...common(r), s.kind, s.title, s.lotRef, s.areaId, s.status, s.pinnedEditionId, s.version, s.previousVersionId, s.deleted, JSON.stringify(r.serverResult ?? null), r.resultDiffers ?? false];
         });
-        await conn.query(
-          `INSERT INTO sheets (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, kind, title, lot_ref, area_id, status, pinned_edition_id, sheet_version, previous_version_id, deleted, server_result, result_differs) VALUES ?
+        await conn.execute(
+          `INSERT INTO sheets (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, kind, title, lot_ref, area_id, status, pinned_edition_id, sheet_version, previous_version_id, deleted, server_result, result_differs) VALUES ${placeholders(values.length, 19)}
            ON DUPLICATE KEY UPDATE content = VALUES(content), revision = VALUES(revision), last_seq = VALUES(last_seq), awaiting_review = VALUES(awaiting_review), updated_at = VALUES(updated_at),
            kind = VALUES(kind), title = VALUES(title), lot_ref = VALUES(lot_ref), area_id = VALUES(area_id), status = VALUES(status), pinned_edition_id = VALUES(pinned_edition_id),
            sheet_version = VALUES(sheet_version), previous_version_id = VALUES(previous_version_id), deleted = VALUES(deleted), server_result = VALUES(server_result), result_differs = VALUES(result_differs)`,
-          [values],
+          bind(values),
         );
       } else if (entity === 'bench_entry') {
         const values = chunk.map((r) => {
           const b = r.content as BenchEntry;
           return [...common(r), b.lotRef, b.sheetId, b.deleted];
         });
-        await conn.query(
-          `INSERT INTO bench_entries (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, lot_ref, sheet_id, deleted) VALUES ?
+        await conn.execute(
+          `INSERT INTO bench_entries (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, lot_ref, sheet_id, deleted) VALUES ${placeholders(values.length, 11)}
            ON DUPLICATE KEY UPDATE content = VALUES(content), revision = VALUES(revision), last_seq = VALUES(last_seq), awaiting_review = VALUES(awaiting_review), updated_at = VALUES(updated_at),
            lot_ref = VALUES(lot_ref), sheet_id = VALUES(sheet_id), deleted = VALUES(deleted)`,
-          [values],
+          bind(values),
         );
       } else {
         const values = chunk.map((r) => [...common(r), (r.content as PhotoMeta).benchEntryId]);
-        await conn.query(
-          `INSERT INTO photo_records (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, bench_entry_id) VALUES ?
+        await conn.execute(
+          `INSERT INTO photo_records (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, bench_entry_id) VALUES ${placeholders(values.length, 9)}
            ON DUPLICATE KEY UPDATE content = VALUES(content), revision = VALUES(revision), last_seq = VALUES(last_seq), awaiting_review = VALUES(awaiting_review), updated_at = VALUES(updated_at)`,
-          [values],
+          bind(values),
         );
       }
     }
@@ -120,7 +146,8 @@ export interface ChangeRow {
 
 export async function insertChanges(conn: PoolConnection, siteId: string, rows: ChangeRow[], now: Date): Promise<void> {
   for (let i = 0; i < rows.length; i += 1000) {
-    const chunk = rows.slice(i, i + 1000).map((c) => [siteId, c.seq, c.entity, c.recordId, c.revision, c.cause, c.mutationId, c.actorUserId, c.deviceId ?? null, now]);
-    await conn.query('INSERT INTO sync_changes (site_id, seq, entity, record_id, revision, cause, mutation_id, actor_user_id, device_id, created_at) VALUES ?', [chunk]);
+    const chunk = rows.slice(i, i + 1000);
+    const values = bind(chunk.map((c) => [siteId, c.seq, c.entity, c.recordId, c.revision, c.cause, c.mutationId, c.actorUserId, c.deviceId ?? null, now]));
+    await conn.execute(`INSERT INTO sync_changes (site_id, seq, entity, record_id, revision, cause, mutation_id, actor_user_id, device_id, created_at) VALUES ${placeholders(chunk.length, 10)}`, values);
   }
 }

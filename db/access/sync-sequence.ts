@@ -15,9 +15,17 @@ export class SiteSequence {
 
   static async lock(conn: PoolConnection, siteId: string): Promise<SiteSequence> {
     const s = new SiteSequence(siteId);
-    await conn.query('INSERT IGNORE INTO sync_site_seq (site_id, seq) VALUES (?, 0)', [siteId]);
-    const [rows] = await conn.query('SELECT seq FROM sync_site_seq WHERE site_id = ? FOR UPDATE', [siteId]);
-    s.current = s.start = Number((rows as { seq: number | string }[])[0]?.seq ?? 0);
+    const select = async () => ((await conn.query('SELECT seq FROM sync_site_seq WHERE site_id = ? FOR UPDATE', [siteId]))[0] as { seq: number | string }[])[0];
+    // The counter row is made once per site and never deleted: after this process has seen it, the
+    // locking read alone is enough.
+    let row = COUNTED_SITES.has(siteId) ? await select() : undefined;
+    if (!row) {
+      await conn.query('INSERT IGNORE INTO sync_site_seq (site_id, seq) VALUES (?, 0)', [siteId]);
+      row = await select();
+    }
+    if (COUNTED_SITES.size >= 10_000) COUNTED_SITES.clear();
+    COUNTED_SITES.add(siteId);
+    s.current = s.start = Number(row?.seq ?? 0);
     return s;
   }
 
@@ -38,6 +46,9 @@ export class SiteSequence {
     this.start = this.current;
   }
 }
+
+/** Sites whose counter row this process has seen. */
+const COUNTED_SITES = new Set<string>();
 
 const TRANSIENT = new Set([1213, 1205, 1020]); // deadlock, lock wait timeout, record changed (Galera)
 
