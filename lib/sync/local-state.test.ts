@@ -33,6 +33,22 @@ describe('push outcomes on the device', () => {
     expect(e.record).toMatchObject({ content: { note: 'later' }, pending: true, serverRevision: 2 });
   });
 
+  it('applied under protocol 2 without content (contentAsSent): the record takes the content this mutation sent', () => {
+    const { content: _left, ...slim } = rec({ revision: 2, seq: 9 });
+    const e = applyOutcome(local, sent, sent, { mutationId: 'm1', recordId: 'r', status: 'applied', revision: 2, record: { ...slim, contentAsSent: true } }, 'now');
+    expect(e.queued).toBeNull();
+    expect(e.record).toMatchObject({ serverRevision: 2, serverSeq: 9, pending: false, content: { note: 'mine' }, serverContent: { note: 'mine' } });
+    expect(e.record).not.toHaveProperty('contentAsSent');
+  });
+
+  it('the same while a later edit merged in flight: the server copy is what was sent, the screen keeps the later edit', () => {
+    const later = { ...sent, mutationId: 'm2', content: { note: 'later' } };
+    const { content: _left, ...slim } = rec({ revision: 2, seq: 9 });
+    const e = applyOutcome({ ...local, content: { note: 'later' } }, later, sent, { mutationId: 'm1', recordId: 'r', status: 'applied', revision: 2, record: { ...slim, contentAsSent: true } }, 'now');
+    expect(e.queued).toMatchObject({ mutationId: 'm2', baseRevision: 2 });
+    expect(e.record).toMatchObject({ content: { note: 'later' }, serverContent: { note: 'mine' }, pending: true });
+  });
+
   it('rejected: kept in the rejected list with its reason, and the server version shows again', () => {
     const e = applyOutcome(local, sent, sent, { mutationId: 'm1', recordId: 'r', status: 'rejected', reason: 'no' }, 'now');
     expect(e.queued).toBeNull();

@@ -1,6 +1,6 @@
 // The device side of the protocol, pure: merging queued edits, applying a push outcome and merging a
 // pulled record. The Dexie layer (lib/local) and the property tests both run these functions.
-import type { Entity, MutationOutcome, ServerRecord } from './protocol';
+import type { Entity, MutationOutcome, OutcomeRecord, ServerRecord } from './protocol';
 
 /** One record as the device holds it: what the screens show plus the server's last known state. */
 export interface LocalRecord<T = unknown> {
@@ -57,6 +57,13 @@ export function queueEdit(
   return { mutationId, entity: edit.entity, recordId: edit.recordId, baseRevision, content: edit.content, queuedAt: now, attempts: 0 };
 }
 
+/** A push outcome's record, whole: protocol 2 leaves out the content the mutation sent (`contentAsSent`). */
+export function withSentContent(r: OutcomeRecord, sent: unknown): ServerRecord {
+  if (!('contentAsSent' in r)) return r;
+  const { contentAsSent: _sent, ...rest } = r;
+  return { ...rest, content: sent };
+}
+
 export function fromServer<T>(r: ServerRecord, pending = false, shown?: T): LocalRecord<T> {
   return {
     entity: r.entity,
@@ -91,7 +98,7 @@ export function applyOutcome(local: LocalRecord | undefined, current: QueuedMuta
       return { queued: current ? { ...current, attempts: current.attempts + 1 } : undefined };
     case 'applied':
     case 'conflict': {
-      const r = outcome.record;
+      const r = withSentContent(outcome.record, sent.content);
       const newer = !local || r.seq >= local.serverSeq;
       if (stillSame || !current) return { queued: stillSame ? null : undefined, record: newer ? fromServer(r) : undefined };
       // A later edit merged meanwhile: it now builds on what the server accepted (or stays on the

@@ -2,11 +2,22 @@
 // from the protocol, kept free of zod so the device does not load the server's message schemas.
 // Re-exported by protocol.ts. See lib/sync/README.md.
 
-/** Bumped when a message changes incompatibly. Older devices get 426 and keep their queue. */
-export const SYNC_PROTOCOL = 1;
+/**
+ * Bumped when a message changes. A device older than MIN_SYNC_PROTOCOL gets 426 and keeps its
+ * queue; one between the two is answered in its own version.
+ *   1 — first version.
+ *   2 — a push outcome's record leaves out `content` when it is exactly what that mutation sent
+ *       (`contentAsSent: true`); the device fills it in from its own copy (lib/sync/README.md).
+ */
+export const SYNC_PROTOCOL = 2;
 export const MIN_SYNC_PROTOCOL = 1;
 /** Header naming the protocol a device speaks, on push and pull. */
 export const PROTOCOL_HEADER = 'x-rungbook-sync-protocol';
+
+/** The protocol version a request speaks (after protocolProblem accepted it). */
+export function protocolOf(header: string | null): number {
+  return Number(header);
+}
 
 /** Why a device's protocol header is not accepted (→ 426, the device keeps its queue), or null. */
 export function protocolProblem(header: string | null): string | null {

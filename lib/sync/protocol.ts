@@ -1,12 +1,13 @@
 // Rungbook sync protocol, version 1: the messages between a device and the server, as zod schemas
 // and types. Pure: no React, Next.js, DOM or database imports. See lib/sync/README.md.
+import equal from 'fast-deep-equal';
 import { z } from 'zod';
 import { benchEntrySchema, photoMetaSchema } from '@/lib/bench/bench-entry-schema';
 import { recordIdSchema, refIdSchema, sheetSchema } from '@/lib/sheets/sheet-schema';
 
 // The protocol version and its header live in protocol-version.ts, without zod: the device's sync
 // engine needs them, and the messages below are classic zod (the server's route helpers take it).
-export { MIN_SYNC_PROTOCOL, PROTOCOL_HEADER, protocolProblem, SYNC_PROTOCOL } from './protocol-version';
+export { MIN_SYNC_PROTOCOL, PROTOCOL_HEADER, protocolOf, protocolProblem, SYNC_PROTOCOL } from './protocol-version';
 
 export const ENTITIES = ['sheet', 'bench_entry', 'photo'] as const;
 export type Entity = (typeof ENTITIES)[number];
@@ -55,9 +56,16 @@ export interface ServerRecord {
   resultDiffers?: boolean;
 }
 
+/**
+ * The record in a push outcome. From protocol 2 it leaves out `content` when that is exactly the
+ * content this mutation sent (`contentAsSent: true`): the device already holds it, so a batch's
+ * answer does not carry the batch back (see `withSentContent` in lib/sync/local-state.ts).
+ */
+export type OutcomeRecord = ServerRecord | (Omit<ServerRecord, 'content'> & { contentAsSent: true });
+
 export type FinalOutcome =
-  | { status: 'applied'; revision: number; record: ServerRecord }
-  | { status: 'conflict'; conflictId: string; record: ServerRecord }
+  | { status: 'applied'; revision: number; record: OutcomeRecord }
+  | { status: 'conflict'; conflictId: string; record: OutcomeRecord }
   | { status: 'rejected'; reason: string; fields?: { field: string; message: string }[] };
 
 export type MutationOutcome =
@@ -66,6 +74,20 @@ export type MutationOutcome =
   | ({ mutationId: string; recordId: string; duplicate: true } & FinalOutcome)
   /** Transient: nothing recorded; send the same mutation again later. */
   | { mutationId: string; recordId: string; status: 'retry'; reason: string };
+
+/**
+ * Protocol 2's push answer: each outcome's record without the content its mutation sent, where the
+ * server stored exactly that content (deep equality; the server's zod parse drops unknown keys, so
+ * a change it altered is answered in full).
+ */
+export function leaveOutSentContent(mutations: readonly Mutation[], outcomes: MutationOutcome[]): MutationOutcome[] {
+  const sent = new Map(mutations.map((m) => [m.mutationId, m.content]));
+  return outcomes.map((o) => {
+    if (!('record' in o) || !('content' in o.record) || !sent.has(o.mutationId) || !equal(o.record.content, sent.get(o.mutationId))) return o;
+    const { content: _content, ...rest } = o.record;
+    return { ...o, record: { ...rest, contentAsSent: true as const } };
+  });
+}
 
 export interface PushResponse {
   protocol: number;

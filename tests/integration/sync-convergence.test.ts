@@ -10,10 +10,11 @@ import { signedIn, type Client } from '../support/http';
 import { closeDb, makeSite, outcomesOf, query } from '../support/db';
 import { sameJson } from '@/lib/sync/canonical-json';
 import type { QueuedMutation } from '@/lib/sync/local-state';
-import type { PullResponse, PushResponse } from '@/lib/sync/protocol';
+import { SYNC_PROTOCOL, type PullResponse, type PushResponse } from '@/lib/sync/protocol';
 import { SimDevice } from '@/lib/sync/testing/sim-device';
 
-const PROTO = { 'x-rungbook-sync-protocol': '1' };
+// The current protocol, as the app speaks it (version 2: outcomes leave out the content sent).
+const PROTO = { 'x-rungbook-sync-protocol': String(SYNC_PROTOCOL) };
 let site: Awaited<ReturnType<typeof makeSite>>;
 let tech: Client;
 let sup: Client;

@@ -318,7 +318,7 @@ describe('conflicts', () => {
       const conflict = o2 as Extract<MutationOutcome, { status: 'conflict' }>;
       // The record keeps the server's version (the first arrival), marked awaiting review.
       expect(conflict.record).toMatchObject({ revision: 2, awaitingReview: true });
-      expect((conflict.record.content as { note: string }).note).toBe((firstM.content as unknown as { note: string }).note);
+      expect((conflict.record as { content: { note: string } }).content.note).toBe((firstM.content as unknown as { note: string }).note);
       const detail = await sup.client.get<{ server: { content: { note: string } }; versions: { content: { note: string } }[]; differences: { field: string }[] }>(`/api/v1/conflicts/${conflict.conflictId}`);
       expect(detail.status).toBe(200);
       expect(detail.body.server.content.note).toBe((firstM.content as unknown as { note: string }).note);
@@ -550,6 +550,38 @@ describe('access', () => {
     const r = await tech.client.post('/api/v1/sync/push', { deviceId: tech.deviceId, userId: tech.userId, siteId: tech.siteId, mutations: [mutation('bench_entry', e)] }, { ...PROTO, origin: 'https://elsewhere.example' });
     expect(r.status).toBe(403);
     expect(await query('SELECT id FROM bench_entries WHERE id = ?', [e.id])).toHaveLength(0);
+  });
+
+  it('protocol 2 answers without the content a device sent; a change the server altered, a conflict and protocol 1 get the record whole', async () => {
+    const as = (v: string, deviceId = tech.deviceId) => async (mutations: unknown[]) => {
+      const r = await tech.client.post<PushResponse>('/api/v1/sync/push', { deviceId, userId: tech.userId, siteId: tech.siteId, mutations }, { 'x-rungbook-sync-protocol': v });
+      expect(r.status, JSON.stringify(r.body)).toBe(200);
+      return r.body;
+    };
+    const same = benchEntry(tech);
+    const altered = { ...benchEntry(tech), colour: 'not a bench-entry field' }; // dropped by the server's schema
+    const v2 = await as('2')([mutation('bench_entry', same), mutation('bench_entry', altered)]);
+    expect(v2.protocol).toBe(2);
+    const [o1, o2] = v2.outcomes as Extract<MutationOutcome, { status: 'applied' }>[];
+    expect(o1).toMatchObject({ status: 'applied', revision: 1, record: { id: same.id, revision: 1, contentAsSent: true } });
+    expect(o1!.record).not.toHaveProperty('content');
+    expect(o2!.record).not.toHaveProperty('contentAsSent');
+    const { colour: _dropped, ...stored } = altered;
+    expect((o2!.record as { content: unknown }).content).toEqual(stored);
+    // What was left out is exactly what the server stored.
+    const [row] = await query<{ content: unknown }>('SELECT content FROM bench_entries WHERE id = ?', [same.id]);
+    expect(row!.content).toEqual(same);
+    // A second tablet's stale edit meets a conflict: the answer carries the server's version.
+    const stale = { ...same, note: 'edited on a stale base' };
+    await as('2')([mutation('bench_entry', { ...same, note: 'the accepted edit' }, 1)]);
+    const [conflict] = (await as('2', v7())([mutation('bench_entry', stale, 1)])).outcomes;
+    expect(conflict).toMatchObject({ status: 'conflict', record: { content: { note: 'the accepted edit' } } });
+    // Protocol 1 (an app not yet reloaded) still gets every record whole.
+    const older = benchEntry(tech);
+    const v1 = await as('1')([mutation('bench_entry', older)]);
+    expect(v1.protocol).toBe(1);
+    expect(v1.outcomes[0]).toMatchObject({ status: 'applied', record: { content: older } });
+    expect(v1.outcomes[0]).not.toHaveProperty('record.contentAsSent');
   });
 
   it('an outdated app gets 426 on push and pull; signed out gets 401', async () => {

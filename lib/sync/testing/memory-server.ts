@@ -3,7 +3,7 @@
 // server's version and collect incoming ones, a change log read by cursor). Test support only.
 import { sameJson } from '../canonical-json';
 import { decideMutation } from '../decide-mutation';
-import type { Mutation, MutationOutcome, PullResponse, ServerRecord } from '../protocol';
+import { leaveOutSentContent, SYNC_PROTOCOL, type Mutation, type MutationOutcome, type PullResponse, type ServerRecord } from '../protocol';
 
 interface Rec {
   record: ServerRecord;
@@ -20,14 +20,16 @@ export class MemoryServer {
   seq = 0;
   private n = 0;
 
-  push(mutations: Mutation[], device = 'device'): MutationOutcome[] {
-    return mutations.map((m) => {
+  /** One push; `protocol` as the device speaks it (2 and later: no content sent back that the device sent). */
+  push(mutations: Mutation[], device = 'device', protocol = SYNC_PROTOCOL): MutationOutcome[] {
+    const outcomes = mutations.map((m) => {
       const first = this.outcomes.get(m.mutationId);
       if (first) return first.status === 'retry' ? first : { ...first, ...this.withRecord(m.recordId, first), duplicate: true as const };
       const o = this.apply(m, device);
       this.outcomes.set(m.mutationId, o);
       return o;
     });
+    return protocol >= 2 ? leaveOutSentContent(mutations, outcomes) : outcomes;
   }
 
   private withRecord(id: string, o: MutationOutcome) {
