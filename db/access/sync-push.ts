@@ -213,10 +213,10 @@ async function runBatch(
   }
   await flush(st, actor, now);
   await seq.save(conn);
-  // Attach the final record state (after every write of the batch).
-  return out.map((o) => {
+  // Attach the final record state (after every write of the batch). out[i] answers req.mutations[i].
+  return out.map((o, i) => {
     if (o.status === 'retry' || o.status === 'rejected') return o;
-    const key = `${req.mutations.find((x) => x.mutationId === o.mutationId)!.entity}:${o.recordId}`;
+    const key = `${req.mutations[i]!.entity}:${o.recordId}`;
     const row = st.records.get(key);
     return row ? { ...o, record: toServerRecord(row) } : o;
   });
