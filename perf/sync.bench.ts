@@ -1,6 +1,7 @@
 // Sync benchmark: push 5,000 waiting changes over HTTP (in the device's batch size) and pull them
 // back by cursor, against the running production build; then a raw mysql2 multi-row insert of the
-// same rows into a scratch copy of the same table, in the same run, as the yardstick.
+// same rows into a scratch copy of the same table, in the same run, as the yardstick (an ordinary
+// table; a TEMPORARY copy is timed and printed beside it).
 // Env: BASE_URL (the served build) and DATABASE_URL (its database). Run by `npm run perf`, or:
 //   BASE_URL=http://127.0.0.1:3106 DATABASE_URL=mysql://… npx tsx perf/sync.bench.ts
 // Targets (issue 6): ≤ 3× the raw insert (printed per operation and for push + pull together), and
@@ -9,6 +10,7 @@ import os from 'node:os';
 import { hash } from '@node-rs/argon2';
 import mysql from 'mysql2/promise';
 import { v7 } from 'uuid';
+import { PROTOCOL_HEADER, SYNC_PROTOCOL } from '../lib/sync/protocol-version';
 import { Client } from '../tests/support/http';
 
 const N = Number(process.env.SYNC_BENCH_N ?? 5000);
@@ -22,7 +24,8 @@ if (!BASE_URL || !DATABASE_URL) {
 }
 
 const db = mysql.createPool({ uri: DATABASE_URL, connectionLimit: 4, timezone: 'Z' });
-const PROTO = { 'x-rungbook-sync-protocol': '1' };
+// The protocol the app speaks now (lib/sync/protocol-version.ts).
+const PROTO = { [PROTOCOL_HEADER]: String(SYNC_PROTOCOL) };
 
 async function freshSite() {
   const siteId = v7();
@@ -61,7 +64,7 @@ function entries(userId: string) {
 
 const secs = (ms: number) => (ms / 1000).toFixed(2);
 
-async function once() {
+async function once(run: number) {
   const { siteId, userId, client } = await freshSite();
   const rows = entries(userId);
   const deviceId = v7();
@@ -89,19 +92,39 @@ async function once() {
   const pullMs = performance.now() - t0;
   if (pulled !== N) throw new Error(`pulled ${pulled} records, expected ${N}`);
 
-  // Yardstick: the same rows, raw multi-row INSERTs (1,000 rows a statement) into a scratch copy.
+  // Yardsticks: the same rows, raw multi-row INSERTs (1,000 rows a statement, autocommit), into a
+  // scratch copy of the same table. Two copies, each timed on its own: an ordinary table, durable
+  // like the real one (the yardstick the verdict uses), and a TEMPORARY table (what earlier
+  // versions of this benchmark used; InnoDB writes no redo log for it, so it is the cheaper one).
   const conn = await db.getConnection();
-  await conn.query('CREATE TEMPORARY TABLE bench_raw LIKE bench_entries');
-  t0 = performance.now();
-  for (let i = 0; i < rows.length; i += 1000) {
-    const values = rows.slice(i, i + 1000).map((e, k) => [e.id, siteId, userId, JSON.stringify(e), 1, i + k + 1, false, new Date(), e.lotRef, null, false]);
-    await conn.query('INSERT INTO bench_raw (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, lot_ref, sheet_id, deleted) VALUES ?', [values]);
+  const rawInto = async (table: string) => {
+    const t = performance.now();
+    for (let i = 0; i < rows.length; i += 1000) {
+      const values = rows.slice(i, i + 1000).map((e, k) => [e.id, siteId, userId, JSON.stringify(e), 1, i + k + 1, false, new Date(), e.lotRef, null, false]);
+      await conn.query(`INSERT INTO ${table} (id, site_id, author_id, content, revision, last_seq, awaiting_review, updated_at, lot_ref, sheet_id, deleted) VALUES ?`, [values]);
+    }
+    return performance.now() - t;
+  };
+  const scratch = `bench_raw_${siteId.replaceAll('-', '').slice(-12)}`;
+  await conn.query(`CREATE TABLE ${scratch} LIKE bench_entries`);
+  await conn.query('CREATE TEMPORARY TABLE bench_raw_temp LIKE bench_entries');
+  let rawMs: number, rawTempMs: number;
+  try {
+    // Alternate which goes first, so neither gains from a warmed cache.
+    if (run % 2 === 0) {
+      rawMs = await rawInto(scratch);
+      rawTempMs = await rawInto('bench_raw_temp');
+    } else {
+      rawTempMs = await rawInto('bench_raw_temp');
+      rawMs = await rawInto(scratch);
+    }
+  } finally {
+    await conn.query(`DROP TABLE IF EXISTS ${scratch}`);
+    await conn.query('DROP TEMPORARY TABLE IF EXISTS bench_raw_temp');
+    conn.release();
   }
-  const rawMs = performance.now() - t0;
-  await conn.query('DROP TEMPORARY TABLE bench_raw');
-  conn.release();
 
-  return { pushMs, pullMs, rawMs };
+  return { pushMs, pullMs, rawMs, rawTempMs };
 }
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
@@ -110,25 +133,27 @@ async function main() {
   const reps = Number(process.env.SYNC_BENCH_REPS ?? 3);
   const runs = [];
   for (let i = 0; i < reps; i++) {
-    const r = await once();
+    const r = await once(i);
     runs.push(r);
-    console.log(`  run ${i + 1}: push ${secs(r.pushMs)} s, pull ${secs(r.pullMs)} s, raw insert ${secs(r.rawMs)} s`);
+    console.log(`  run ${i + 1}: push ${secs(r.pushMs)} s, pull ${secs(r.pullMs)} s, raw insert ${secs(r.rawMs)} s (temporary table ${secs(r.rawTempMs)} s)`);
   }
   const pushMs = median(runs.map((r) => r.pushMs));
   const pullMs = median(runs.map((r) => r.pullMs));
   const rawMs = median(runs.map((r) => r.rawMs));
+  const rawTempMs = median(runs.map((r) => r.rawTempMs));
   const total = pushMs + pullMs;
   console.log(`sync benchmark — ${N} bench entries, push batches of ${PUSH_BATCH}, pull pages of ${PULL_PAGE}; median of ${reps} runs (each on a fresh site); ${os.cpus().length} cores, Node ${process.version}`);
   console.log(`  push ${N} changes:        ${secs(pushMs)} s  (${(pushMs / N).toFixed(3)} ms per change)`);
   console.log(`  pull ${N} changes:        ${secs(pullMs)} s`);
   console.log(`  push + pull:             ${secs(total)} s   target ≤ 10 s: ${total <= 10_000 ? 'met' : 'MISSED'}`);
-  console.log(`  raw multi-row insert:    ${secs(rawMs)} s`);
+  console.log(`  raw multi-row insert:    ${secs(rawMs)} s   (into an ordinary scratch table, durable like the real one)`);
+  console.log(`    into a TEMPORARY table: ${secs(rawTempMs)} s   (no redo log; shown for comparison with earlier figures)`);
   // The issue's "≤ 3× the raw insert" is read two ways; both are printed, neither hidden:
   // each operation against the insert, and (the strictest reading) push and pull together.
   const verdict = (r: number) => `${r.toFixed(1)}×   target ≤ 3×: ${r <= 3 ? 'met' : 'MISSED'}`;
-  console.log(`  ratio push / raw:        ${verdict(pushMs / rawMs)}`);
-  console.log(`  ratio pull / raw:        ${verdict(pullMs / rawMs)}`);
-  console.log(`  ratio (push+pull) / raw: ${verdict(total / rawMs)}   (both operations against one insert)`);
+  console.log(`  ratio push / raw:        ${verdict(pushMs / rawMs)}   (against the temporary table: ${(pushMs / rawTempMs).toFixed(1)}×)`);
+  console.log(`  ratio pull / raw:        ${verdict(pullMs / rawMs)}   (against the temporary table: ${(pullMs / rawTempMs).toFixed(1)}×)`);
+  console.log(`  ratio (push+pull) / raw: ${verdict(total / rawMs)}   (both operations against one insert; against the temporary table: ${(total / rawTempMs).toFixed(1)}×)`);
   await db.end();
 }
 
