@@ -74,7 +74,7 @@ export class MemoryServer {
   pull(cursor: number, limit: number): PullResponse {
     const rows = this.log.filter((l) => l.seq > cursor).slice(0, limit);
     const ids = [...new Set(rows.map((r) => r.id))];
-    return { protocol: 1, records: ids.map((id) => ({ ...this.records.get(id)!.record })), cursor: rows.at(-1)?.seq ?? cursor, more: rows.length === limit };
+    return { protocol: SYNC_PROTOCOL, records: ids.map((id) => ({ ...this.records.get(id)!.record })), cursor: rows.at(-1)?.seq ?? cursor, more: rows.length === limit };
   }
 
   /** A supervisor settles a conflict: `pick` -1 keeps the server's version, i ≥ 0 takes version i. */
