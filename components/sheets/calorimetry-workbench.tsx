@@ -47,11 +47,11 @@ export function CalorimetryWorkbench({ defaults, onChange, build, unit, suggesti
         <Field label="Water mass (g)" error={err('waterMassG')}>
           {(p) => <input {...p} {...register('waterMassG')} inputMode="decimal" className="field-input tabular-nums" />}
         </Field>
-        <Field label="Heat capacity basis" error={err('heatCapacityBasis')}>
+        <Field label="Heat capacity applies to" error={err('heatCapacityBasis')}>
           {(p) => (
             <select {...p} {...register('heatCapacityBasis')} className="field-input">
-              <option value="solution">solution (water + sample)</option>
-              <option value="water">water only</option>
+              <option value="solution">the whole solution</option>
+              <option value="water">the water only</option>
             </select>
           )}
         </Field>

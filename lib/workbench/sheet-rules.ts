@@ -21,7 +21,7 @@ export function mayEdit(sheet: Pick<Sheet, 'status' | 'authorId'>, who: Who): Ve
 
 export function maySubmit(sheet: Pick<Sheet, 'status' | 'authorId'>, who: Who, solved: boolean): Verdict {
   if (sheet.status !== 'draft') return no('Only a draft can be submitted.');
-  if (!solved) return no('The sheet must solve before it is submitted: fix the messages above.');
+  if (!solved) return no('The sheet must solve before it is submitted: see the result above.');
   if (sheet.authorId !== who.userId && !can(who.role, 'sheet.correct')) return no('Only its author or a supervisor may submit this sheet.');
   return yes;
 }
