@@ -130,7 +130,7 @@ async function once(run: number) {
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
 
 async function main() {
-  const reps = Number(process.env.SYNC_BENCH_REPS ?? 3);
+  const reps = Number(process.env.SYNC_BENCH_REPS ?? 5);
   const runs = [];
   for (let i = 0; i < reps; i++) {
     const r = await once(i);
