@@ -4,6 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import Link from 'next/link';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { Field } from '@/components/ui/field';
 import { postJson } from '@/components/ui/post-json';
 import { acceptInvitationSchema } from '@/lib/validation/auth-forms';
 
@@ -33,20 +34,12 @@ export function AcceptInvitationForm({ token }: { token: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       <input type="hidden" {...form.register('token')} />
-      <div>
-        <label htmlFor="password" className="field-label">
-          New password (at least 10 characters)
-        </label>
-        <input id="password" type="password" autoComplete="new-password" className="field-input" {...form.register('password')} />
-        {errors.password ? <p className="field-error">{errors.password.message}</p> : null}
-      </div>
-      <div>
-        <label htmlFor="confirm" className="field-label">
-          The same password again
-        </label>
-        <input id="confirm" type="password" autoComplete="new-password" className="field-input" {...form.register('confirm')} />
-        {errors.confirm ? <p className="field-error">{errors.confirm.message}</p> : null}
-      </div>
+      <Field label="New password (at least 10 characters)" error={errors.password?.message}>
+        {(p) => <input {...p} type="password" autoComplete="new-password" className="field-input" {...form.register('password')} />}
+      </Field>
+      <Field label="The same password again" error={errors.confirm?.message}>
+        {(p) => <input {...p} type="password" autoComplete="new-password" className="field-input" {...form.register('confirm')} />}
+      </Field>
       {errors.token ? <p className="field-error">{errors.token.message}</p> : null}
       {error ? (
         <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">

@@ -5,6 +5,7 @@ import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { Field } from '@/components/ui/field';
 import { postJson } from '@/components/ui/post-json';
 import { signInLinkSchema, signInSchema } from '@/lib/validation/auth-forms';
 
@@ -42,20 +43,12 @@ export function SignInForm({ next }: { next: string }) {
 
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
-      <div>
-        <label htmlFor="email" className="field-label">
-          E-mail
-        </label>
-        <input id="email" type="email" autoComplete="username" className="field-input" aria-invalid={!!errors.email} aria-describedby="email-error" {...form.register('email')} />
-        {errors.email ? <p id="email-error" className="field-error">{errors.email.message}</p> : null}
-      </div>
-      <div>
-        <label htmlFor="password" className="field-label">
-          Password
-        </label>
-        <input id="password" type="password" autoComplete="current-password" className="field-input" aria-invalid={!!errors.password} aria-describedby="password-error" {...form.register('password')} />
-        {errors.password ? <p id="password-error" className="field-error">{errors.password.message}</p> : null}
-      </div>
+      <Field label="E-mail" error={errors.email?.message}>
+        {(p) => <input {...p} type="email" autoComplete="username" className="field-input" {...form.register('email')} />}
+      </Field>
+      <Field label="Password" error={errors.password?.message}>
+        {(p) => <input {...p} type="password" autoComplete="current-password" className="field-input" {...form.register('password')} />}
+      </Field>
       {error ? (
         <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">
           {error}

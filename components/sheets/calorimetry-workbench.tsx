@@ -4,7 +4,7 @@
 import { calorimetryFormSchema, type CalorimetryForm } from '@/lib/workbench/calorimetry-sheet';
 import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib/workbench/format-energy';
-import { Field } from './field';
+import { Field } from '@/components/ui/field';
 import { useMarkCommit } from './perf-marks';
 import { useFieldMessages, useLiveForm } from './use-live-form';
 

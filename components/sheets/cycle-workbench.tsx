@@ -10,7 +10,7 @@ import { switchConvention, type CycleForm, type CycleSheetBuild, type StepRow } 
 import { errorFor } from '@/lib/workbench/field-error';
 import { energyText, formatEnergy, kjToTyped, type DisplayUnit } from '@/lib/workbench/format-energy';
 import { ladderGeometry } from '@/lib/workbench/ladder-geometry';
-import { Field } from './field';
+import { Field } from '@/components/ui/field';
 import { ModelCheckPanel } from './model-check-panel';
 import { markInput, useMarkCommit } from './perf-marks';
 import { Segmented } from './segmented';

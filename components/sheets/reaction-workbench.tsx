@@ -8,7 +8,7 @@ import { energyText, formatNumber, formatRounded, type DisplayUnit } from '@/lib
 import { reactionFormSchema, reactionTerms, type ReactionForm } from '@/lib/workbench/reaction-sheet';
 import type { SheetBuild } from '@/lib/workbench/dissolution-sheet';
 import { Cautions } from './cautions';
-import { Field } from './field';
+import { Field } from '@/components/ui/field';
 import { useMarkCommit } from './perf-marks';
 import { useFieldMessages, useLiveForm } from './use-live-form';
 

@@ -13,7 +13,7 @@ import { KIND_TEXT, mayEdit, mayReturnToDraft, maySignOff, maySubmit, STATUS_TEX
 import { isZodError } from '@/lib/validation/zod-mini';
 import { makeValueSource } from '@/lib/workbench/value-source';
 import { CycleWorkbench } from './cycle-workbench';
-import { Field } from './field';
+import { Field } from '@/components/ui/field';
 import { exportSheetPdf } from './export-pdf';
 import { formOf, type AnyForm } from './sheet-forms';
 import type * as OtherKindsModule from './other-kinds';
