@@ -5,6 +5,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { Field } from '@/components/ui/field';
 import { DataTable } from '@/components/ui/data-table';
 import { postJson } from '@/components/ui/post-json';
 import { inviteUserSchema } from '@/lib/validation/admin-forms';
@@ -120,30 +121,21 @@ function InviteForm({ onInvited }: { onInvited: () => void }) {
   });
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-3 border-t border-rule pt-4 sm:grid-cols-[1fr_1fr_auto_auto] sm:items-end">
-      <div>
-        <label htmlFor="invite-email" className="field-label">
-          E-mail
-        </label>
-        <input id="invite-email" type="email" className="field-input" {...form.register('email')} />
-        {errors.email ? <p className="field-error">{errors.email.message}</p> : null}
-      </div>
-      <div>
-        <label htmlFor="invite-name" className="field-label">
-          Name or role account
-        </label>
-        <input id="invite-name" className="field-input" {...form.register('displayName')} />
-        {errors.displayName ? <p className="field-error">{errors.displayName.message}</p> : null}
-      </div>
-      <div>
-        <label htmlFor="invite-role" className="field-label">
-          Role
-        </label>
-        <select id="invite-role" className="field-input" {...form.register('role')}>
-          <option value="technician">technician</option>
-          <option value="supervisor">supervisor</option>
-          <option value="admin">admin</option>
-        </select>
-      </div>
+      <Field label="E-mail" error={errors.email?.message}>
+        {(p) => <input {...p} type="email" className="field-input" {...form.register('email')} />}
+      </Field>
+      <Field label="Name or role account" error={errors.displayName?.message}>
+        {(p) => <input {...p} className="field-input" {...form.register('displayName')} />}
+      </Field>
+      <Field label="Role">
+        {(p) => (
+          <select {...p} className="field-input" {...form.register('role')}>
+            <option value="technician">technician</option>
+            <option value="supervisor">supervisor</option>
+            <option value="admin">admin</option>
+          </select>
+        )}
+      </Field>
       <button type="submit" className="btn-primary" disabled={isSubmitting}>
         Invite
       </button>

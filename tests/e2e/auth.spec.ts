@@ -54,3 +54,41 @@ test('a technician does not see Admin or Reconcile and is turned away from them'
   await page.goto('/admin');
   await expect(page.getByRole('heading', { name: 'Not allowed for your role' })).toBeVisible();
 });
+
+test('an admin invites a new account; the invitee sets a password from the e-mailed link (mismatch named first) and signs in', async ({ page, browser }) => {
+  const invitee = `new.technician.${Date.now()}@calder-reach.test`;
+  const since = Date.now() - 1000;
+  await page.goto('/sign-in?next=%2Fadmin');
+  await page.getByLabel('E-mail').fill(DEMO.admin);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await expect(page.getByRole('heading', { name: 'Admin' })).toBeVisible();
+  // A bad address is named at the field, and nothing is sent.
+  await page.getByLabel('E-mail').fill('not an address');
+  await page.getByLabel('Name or role account').fill('Second-shift technician');
+  await page.getByRole('button', { name: 'Invite', exact: true }).click();
+  await expect(page.getByLabel('E-mail')).toHaveAttribute('aria-invalid', 'true');
+  await page.getByLabel('E-mail').fill(invitee);
+  await page.getByRole('button', { name: 'Invite', exact: true }).click();
+  await expect(page.getByRole('cell', { name: invitee, exact: true })).toBeVisible();
+
+  const mail = await waitForMail(invitee, 'invited to Rungbook', since);
+  const link = /https?:\/\/\S+/.exec(mail.text)![0];
+  const context = await browser.newContext();
+  const guest = await context.newPage();
+  await guest.goto(link);
+  await guest.getByLabel('New password (at least 10 characters)').fill('a-long-new-password');
+  await guest.getByLabel('The same password again').fill('a-different-password');
+  await guest.getByRole('button', { name: 'Set password' }).click();
+  await expect(guest.getByLabel('The same password again')).toHaveAttribute('aria-invalid', 'true');
+  await expect(guest.getByText('The two passwords differ')).toBeVisible();
+  await guest.getByLabel('The same password again').fill('a-long-new-password');
+  await guest.getByRole('button', { name: 'Set password' }).click();
+  await expect(guest.getByRole('status').filter({ hasText: `Your password is set for ${invitee}` })).toBeVisible();
+  await guest.getByRole('link', { name: 'Sign in' }).click();
+  await guest.getByLabel('E-mail').fill(invitee);
+  await guest.getByLabel('Password').fill('a-long-new-password');
+  await guest.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await expect(guest.getByText('Signed in as Second-shift technician (technician)')).toBeVisible();
+  await context.close();
+});
