@@ -152,9 +152,6 @@ async function runBatch(
   // Lock first, then read: READ COMMITTED + the site lock means a parallel replay of the same batch
   // waits here and then sees the first one's outcomes (duplicate), never a half state.
   const seq = await SiteSequence.lock(conn, actor.siteId);
-  const ids = req.mutations.map((m) => m.mutationId);
-  const [prior] = ids.length ? await conn.execute(priorOutcomesSql(ids.length), [...ids, ...ids]) : [[]];
-  const priorById = new Map((prior as Record<string, unknown>[]).map((r) => [String(r.mutation_id), r]));
 
   const records = new Map<string, RecordRow>();
   for (const entity of ['sheet', 'bench_entry', 'photo'] as const) {
@@ -169,6 +166,7 @@ async function runBatch(
     }
     for (const [id, row] of await loadRecords(conn, entity, [...wanted], true)) records.set(`${entity}:${id}`, row);
   }
+  const priorById = await priorOutcomes(conn, actor, req.mutations, records);
 
   const st: BatchState = { conn, seq, records, writes: new Map(), changes: [], mutationRows: [], logged: new Set(), conflictRows: [], versionRows: [], audits: [], openedConflicts: 0, deviceId: req.deviceId };
   const out: MutationOutcome[] = [];
@@ -226,11 +224,39 @@ async function runBatch(
  * Earlier outcomes of these mutation ids (design.md §4: a replay gets the first outcome). An applied
  * mutation that changed its record is answered from its change-log row (the row the pull reads,
  * committed in the same transaction as the record); every other outcome (a conflict, a rejection,
- * an applied no-op) has its own row in sync_mutations.
+ * an applied no-op) has its own row in sync_mutations. Read after the records: a mutation that was
+ * applied left its record on the server (a delete is a tombstone; no record is ever removed), so
+ * the change log is searched only for mutations whose record exists — a batch of new records reads
+ * sync_mutations alone.
+ *
+ * Mutation ids are made on devices: should another user's device send an id already used (the same
+ * UUID by accident, or on purpose), the rows of this user come first, so the honest device still
+ * gets its own first outcome; only when every row belongs to someone else is the id refused.
  */
-const priorOutcomesSql = (n: number) => `SELECT mutation_id, site_id, user_id, entity, record_id, status, revision, conflict_id, reason FROM sync_mutations WHERE mutation_id IN (${placeholders(n)})
-  UNION ALL
-  SELECT mutation_id, site_id, actor_user_id, entity, record_id, 'applied', revision, NULL, NULL FROM sync_changes WHERE mutation_id IN (${placeholders(n)}) AND cause = 'mutation'`;
+async function priorOutcomes(conn: PoolConnection, actor: UserActor, mutations: Mutation[], records: Map<string, RecordRow>): Promise<Map<string, Record<string, unknown>>> {
+  const out = new Map<string, Record<string, unknown>>();
+  if (mutations.length === 0) return out;
+  const ids = mutations.map((m) => m.mutationId);
+  const applied = mutations.filter((m) => records.has(`${m.entity}:${m.recordId}`)).map((m) => m.mutationId);
+  const [rows] = await conn.execute(
+    `SELECT mutation_id, site_id, user_id, entity, record_id, status, revision, conflict_id, reason, created_at, NULL AS seq FROM sync_mutations WHERE mutation_id IN (${placeholders(ids.length)})` +
+      (applied.length
+        ? ` UNION ALL SELECT mutation_id, site_id, actor_user_id, entity, record_id, 'applied', revision, NULL, NULL, created_at, seq FROM sync_changes WHERE mutation_id IN (${placeholders(applied.length)}) AND cause = 'mutation'`
+        : ''),
+    [...ids, ...applied],
+  );
+  const mine = (r: Record<string, unknown>) => r.site_id === actor.siteId && r.user_id === actor.userId;
+  const earlier = (a: Record<string, unknown>, b: Record<string, unknown>) => {
+    const t = new Date(a.created_at as Date).getTime() - new Date(b.created_at as Date).getTime();
+    return t !== 0 ? t < 0 : Number(a.seq ?? Infinity) < Number(b.seq ?? Infinity);
+  };
+  for (const r of rows as Record<string, unknown>[]) {
+    const id = String(r.mutation_id);
+    const held = out.get(id);
+    if (!held || (mine(r) && (!mine(held) || earlier(r, held))) || (!mine(r) && !mine(held) && earlier(r, held))) out.set(id, r);
+  }
+  return out;
+}
 
 function recordOutcome(st: BatchState, actor: UserActor, deviceId: string, m: Mutation, o: MutationOutcome, now: Date) {
   if (o.status === 'retry') return;

@@ -133,6 +133,24 @@ describe('push: exactly once', () => {
     expect(await outcomesOf([e.id])).toEqual([{ mutation_id: m.mutationId, record_id: e.id, status: 'applied', revision: 1 }]);
   });
 
+  it("a mutation id another user's device sends again never takes the first device's outcome, and a replay of it still gets its own", async () => {
+    const mine = benchEntry(tech);
+    const m = mutation('bench_entry', mine);
+    await pushOk(tech, [m]);
+    // The same id on a supervisor's tablet: for the same record, and for a record of its own.
+    const sameRecord = await pushOk(sup, [{ ...m, content: { ...mine, note: 'not theirs to change' }, baseRevision: 1 }]);
+    expect(sameRecord[0]).toMatchObject({ status: 'rejected' });
+    expect(sameRecord[0]).not.toHaveProperty('duplicate');
+    const theirs = benchEntry(sup);
+    const other = await pushOk(sup, [{ ...mutation('bench_entry', theirs), mutationId: m.mutationId }]);
+    expect(other[0]).not.toHaveProperty('duplicate');
+    // The technician's replay is still answered with the first outcome, and the entry is unchanged.
+    const [again] = await pushOk(tech, [m]);
+    expect(again).toMatchObject({ status: 'applied', revision: 1, duplicate: true });
+    const [row] = await query<{ revision: number; content: { note: string } }>('SELECT revision, content FROM bench_entries WHERE id = ?', [mine.id]);
+    expect(row).toMatchObject({ revision: 1, content: { note: mine.note } });
+  });
+
   it('the server dropping the connection after commit, before replying: the retry applies the change exactly once', async () => {
     // Simulated honestly without a test hook in the server: a loopback proxy forwards the push to
     // the real server, waits for its full reply (so the transaction has committed) and then
