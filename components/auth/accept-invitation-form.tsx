@@ -5,6 +5,7 @@ import Link from 'next/link';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Field } from '@/components/ui/field';
+import { FormAlert } from '@/components/ui/form-alert';
 import { postJson } from '@/components/ui/post-json';
 import { acceptInvitationSchema } from '@/lib/validation/auth-forms';
 
@@ -41,11 +42,7 @@ export function AcceptInvitationForm({ token }: { token: string }) {
         {(p) => <input {...p} type="password" autoComplete="new-password" className="field-input" {...form.register('confirm')} />}
       </Field>
       {errors.token ? <p className="field-error">{errors.token.message}</p> : null}
-      {error ? (
-        <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">
-          {error}
-        </p>
-      ) : null}
+      {error ? <FormAlert>{error}</FormAlert> : null}
       <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
         Set password
       </button>

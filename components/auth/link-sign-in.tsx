@@ -4,6 +4,7 @@ import { signIn } from 'next-auth/react';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
+import { FormAlert } from '@/components/ui/form-alert';
 
 /** The link is used only when the person presses the button, so a mail scanner's visit does not spend it. */
 export function LinkSignIn({ token }: { token: string }) {
@@ -25,9 +26,7 @@ export function LinkSignIn({ token }: { token: string }) {
     <div className="space-y-4">
       {error ? (
         <>
-          <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">
-            {error}
-          </p>
+          <FormAlert>{error}</FormAlert>
           <Link href="/sign-in" className="btn-quiet w-full">
             Back to sign-in
           </Link>

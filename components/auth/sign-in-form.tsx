@@ -6,6 +6,7 @@ import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Field } from '@/components/ui/field';
+import { FormAlert } from '@/components/ui/form-alert';
 import { postJson } from '@/components/ui/post-json';
 import { signInLinkSchema, signInSchema } from '@/lib/validation/auth-forms';
 
@@ -49,11 +50,7 @@ export function SignInForm({ next }: { next: string }) {
       <Field label="Password" error={errors.password?.message}>
         {(p) => <input {...p} type="password" autoComplete="current-password" className="field-input" {...form.register('password')} />}
       </Field>
-      {error ? (
-        <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">
-          {error}
-        </p>
-      ) : null}
+      {error ? <FormAlert>{error}</FormAlert> : null}
       <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
         {isSubmitting ? 'Signing in…' : 'Sign in'}
       </button>

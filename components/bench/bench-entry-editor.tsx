@@ -3,6 +3,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { FormAlert } from '@/components/ui/form-alert';
 import { newBenchEntry, saveBenchEntry, savePhoto, syncNow, useBenchEntries, useSheets, type BenchEntry, type LocalRecord } from '@/lib/local';
 import { formatBytes } from '@/lib/photos/photo-limits';
 import { isZodError } from '@/lib/validation/zod-mini';
@@ -185,11 +186,7 @@ export function BenchEntryEditor({ existing, defaults, onSaved, onCancel }: Benc
         )}
       </fieldset>
 
-      {saveError && (
-        <p role="alert" className="rounded-md border border-ember-500 bg-ember-50 px-3 py-2 text-sm text-ember-700">
-          Not saved: {saveError}
-        </p>
-      )}
+      {saveError && <FormAlert>Not saved: {saveError}</FormAlert>}
       <div className="flex flex-wrap gap-2">
         <button type="submit" className="btn-primary" disabled={isSubmitting}>
           {existing ? 'Save changes' : 'Save entry'}
