@@ -245,15 +245,16 @@ async function priorOutcomes(conn: PoolConnection, actor: UserActor, mutations: 
         : ''),
     [...ids, ...applied],
   );
-  const mine = (r: Record<string, unknown>) => r.site_id === actor.siteId && r.user_id === actor.userId;
-  const earlier = (a: Record<string, unknown>, b: Record<string, unknown>) => {
-    const t = new Date(a.created_at as Date).getTime() - new Date(b.created_at as Date).getTime();
-    return t !== 0 ? t < 0 : Number(a.seq ?? Infinity) < Number(b.seq ?? Infinity);
+  // This user's rows first, then the earliest.
+  const rank = (r: Record<string, unknown>) => [r.site_id === actor.siteId && r.user_id === actor.userId ? 0 : 1, new Date(r.created_at as Date).getTime(), Number(r.seq ?? Infinity)];
+  const before = (a: number[], b: number[]) => {
+    const i = a.findIndex((x, k) => x !== b[k]);
+    return i >= 0 && a[i]! < b[i]!;
   };
   for (const r of rows as Record<string, unknown>[]) {
     const id = String(r.mutation_id);
     const held = out.get(id);
-    if (!held || (mine(r) && (!mine(held) || earlier(r, held))) || (!mine(r) && !mine(held) && earlier(r, held))) out.set(id, r);
+    if (!held || before(rank(r), rank(held))) out.set(id, r);
   }
   return out;
 }
