@@ -3,6 +3,7 @@ import type { ExecuteValues, PoolConnection } from 'mysql2/promise';
 import type { BenchEntry, PhotoMeta } from '@/lib/bench/bench-entry-schema';
 import type { Sheet } from '@/lib/sheets/sheet-schema';
 import type { Entity, ServerRecord } from '@/lib/sync/protocol';
+import type { SiteSequence } from './sync-sequence';
 
 /** A synced record row, whatever its entity (raw SQL: the push handler needs FOR UPDATE and multi-row writes). */
 export interface RecordRow {
@@ -150,4 +151,18 @@ export async function insertChanges(conn: PoolConnection, siteId: string, rows: 
     const values = bind(chunk.map((c) => [siteId, c.seq, c.entity, c.recordId, c.revision, c.cause, c.mutationId, c.actorUserId, c.deviceId ?? null, now]));
     await conn.execute(`INSERT INTO sync_changes (site_id, seq, entity, record_id, revision, cause, mutation_id, actor_user_id, device_id, created_at) VALUES ${placeholders(chunk.length, 10)}`, values);
   }
+}
+
+/**
+ * Write records made outside a push (the demo seeds) the way a push stores them: each record with
+ * its change-log row, the site counter moved on, in the caller's transaction (which holds the
+ * counter's lock). Returns how many records were written.
+ */
+export async function writeRecordsWithChanges(conn: PoolConnection, seq: SiteSequence, siteId: string, rows: RecordRow[], changes: ChangeRow[]): Promise<number> {
+  if (rows.length === 0) return 0;
+  const now = new Date();
+  await upsertRecords(conn, rows, now);
+  await insertChanges(conn, siteId, changes, now);
+  await seq.save(conn);
+  return rows.length;
 }

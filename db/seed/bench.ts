@@ -1,7 +1,7 @@
 import 'server-only';
 import { createHash } from 'node:crypto';
 import { pool } from '@/db/client';
-import { insertChanges, upsertRecords, type ChangeRow, type RecordRow } from '@/db/access/sync-records';
+import { writeRecordsWithChanges, type ChangeRow, type RecordRow } from '@/db/access/sync-records';
 import { SiteSequence, withSyncTransaction } from '@/db/access/sync-sequence';
 import { benchEntrySchema, type BenchEntry } from '@/lib/bench/bench-entry-schema';
 
@@ -101,12 +101,7 @@ export async function seedBenchEntries(siteId: string): Promise<number> {
         rows.push({ entity: 'bench_entry', id, siteId, authorId: author, content, revision: 1, lastSeq: n, awaitingReview: false });
         changes.push({ seq: n, entity: 'bench_entry', recordId: id, revision: 1, cause: 'mutation', mutationId: null, actorUserId: author });
       }
-      if (rows.length === 0) return 0;
-      const now = new Date();
-      await upsertRecords(conn, rows, now);
-      await insertChanges(conn, siteId, changes, now);
-      await seq.save(conn);
-      return rows.length;
+      return writeRecordsWithChanges(conn, seq, siteId, rows, changes);
     },
   );
 }

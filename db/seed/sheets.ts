@@ -3,7 +3,7 @@ import { createHash } from 'node:crypto';
 import { pool } from '@/db/client';
 import { getEditionInForce, getEditionValues } from '@/db/access/editions';
 import { solveSheet } from '@/db/access/sync-drift';
-import { insertChanges, upsertRecords, type ChangeRow, type RecordRow } from '@/db/access/sync-records';
+import { writeRecordsWithChanges, type ChangeRow, type RecordRow } from '@/db/access/sync-records';
 import { SiteSequence, withSyncTransaction } from '@/db/access/sync-sequence';
 import { sheetSchema, type ResolvedInput, type Sheet, type SheetKind, type SheetStatus } from '@/lib/sheets/sheet-schema';
 import { sameJson } from '@/lib/sync/canonical-json';
@@ -240,12 +240,7 @@ export async function seedDemoSheets(siteId: string): Promise<number> {
         });
         changes.push({ seq: n, entity: 'sheet', recordId: id, revision: 1, cause: 'mutation', mutationId: null, actorUserId: signer ?? author });
       }
-      if (rows.length === 0) return 0;
-      const now = new Date();
-      await upsertRecords(conn, rows, now);
-      await insertChanges(conn, siteId, changes, now);
-      await seq.save(conn);
-      return rows.length;
+      return writeRecordsWithChanges(conn, seq, siteId, rows, changes);
     },
   );
 }
