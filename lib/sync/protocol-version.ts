@@ -14,11 +14,6 @@ export const MIN_SYNC_PROTOCOL = 1;
 /** Header naming the protocol a device speaks, on push and pull. */
 export const PROTOCOL_HEADER = 'x-rungbook-sync-protocol';
 
-/** The protocol version a request speaks (after protocolProblem accepted it). */
-export function protocolOf(header: string | null): number {
-  return Number(header);
-}
-
 /** Why a device's protocol header is not accepted (→ 426, the device keeps its queue), or null. */
 export function protocolProblem(header: string | null): string | null {
   const v = header === null ? NaN : Number(header);

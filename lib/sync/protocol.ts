@@ -7,7 +7,7 @@ import { recordIdSchema, refIdSchema, sheetSchema } from '@/lib/sheets/sheet-sch
 
 // The protocol version and its header live in protocol-version.ts, without zod: the device's sync
 // engine needs them, and the messages below are classic zod (the server's route helpers take it).
-export { MIN_SYNC_PROTOCOL, PROTOCOL_HEADER, protocolOf, protocolProblem, SYNC_PROTOCOL } from './protocol-version';
+export { MIN_SYNC_PROTOCOL, PROTOCOL_HEADER, protocolProblem, SYNC_PROTOCOL } from './protocol-version';
 
 export const ENTITIES = ['sheet', 'bench_entry', 'photo'] as const;
 export type Entity = (typeof ENTITIES)[number];

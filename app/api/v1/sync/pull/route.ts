@@ -7,7 +7,7 @@ import { route } from '@/lib/server/route';
 import { pullQuerySchema } from '@/lib/sync/protocol';
 
 export const GET = route({ requires: 'site.read' }, async ({ req, actor, query }) => {
-  const user = requireSyncUser(req, actor);
+  const { user } = requireSyncUser(req, actor);
   const { cursor, limit } = query(pullQuerySchema);
   const page = await pullChanges(user.siteId, cursor, limit);
   void maybeSendConflictDigest(user.siteId);
