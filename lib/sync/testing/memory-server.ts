@@ -20,8 +20,8 @@ export class MemoryServer {
   seq = 0;
   private n = 0;
 
-  /** One push; `protocol` as the device speaks it (2 and later: no content sent back that the device sent). */
-  push(mutations: Mutation[], device = 'device', protocol = SYNC_PROTOCOL): MutationOutcome[] {
+  /** One push, answered in the current protocol (no record content sent back that the device sent). */
+  push(mutations: Mutation[], device = 'device'): MutationOutcome[] {
     const outcomes = mutations.map((m) => {
       const first = this.outcomes.get(m.mutationId);
       if (first) return first.status === 'retry' ? first : { ...first, ...this.withRecord(m.recordId, first), duplicate: true as const };
@@ -29,7 +29,7 @@ export class MemoryServer {
       this.outcomes.set(m.mutationId, o);
       return o;
     });
-    return protocol >= 2 ? leaveOutSentContent(mutations, outcomes) : outcomes;
+    return leaveOutSentContent(mutations, outcomes);
   }
 
   private withRecord(id: string, o: MutationOutcome) {
