@@ -4,6 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { Field } from '@/components/ui/field';
 import { postJson } from '@/components/ui/post-json';
 import { createTokenSchema } from '@/lib/validation/admin-forms';
 
@@ -75,24 +76,19 @@ export function TokensPanel() {
           </li>
         ))}
       </ul>
-      <form onSubmit={onSubmit} noValidate className="grid gap-3 border-t border-rule pt-4 sm:grid-cols-[1fr_auto_auto] sm:items-end">
-        <div>
-          <label htmlFor="token-name" className="field-label">
-            Token name
-          </label>
-          <input id="token-name" className="field-input" {...form.register('name')} />
-          {form.formState.errors.name ? <p className="field-error">{form.formState.errors.name.message}</p> : null}
-        </div>
-        <div>
-          <label htmlFor="token-role" className="field-label">
-            Acts as
-          </label>
-          <select id="token-role" className="field-input" {...form.register('role')}>
-            <option value="technician">technician</option>
-            <option value="supervisor">supervisor</option>
-          </select>
-        </div>
-        <button type="submit" className="btn-primary">
+      <form onSubmit={onSubmit} noValidate className="grid gap-3 border-t border-rule pt-4 sm:grid-cols-[1fr_auto_auto] sm:items-start">
+        <Field label="Token name" error={form.formState.errors.name?.message}>
+          {(p) => <input {...p} className="field-input" {...form.register('name')} />}
+        </Field>
+        <Field label="Acts as">
+          {(p) => (
+            <select {...p} className="field-input" {...form.register('role')}>
+              <option value="technician">technician</option>
+              <option value="supervisor">supervisor</option>
+            </select>
+          )}
+        </Field>
+        <button type="submit" className="btn-primary sm:mt-6">
           Create token
         </button>
       </form>

@@ -120,7 +120,7 @@ function InviteForm({ onInvited }: { onInvited: () => void }) {
     }
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid gap-3 border-t border-rule pt-4 sm:grid-cols-[1fr_1fr_auto_auto] sm:items-end">
+    <form onSubmit={onSubmit} noValidate className="grid gap-3 border-t border-rule pt-4 sm:grid-cols-[1fr_1fr_auto_auto] sm:items-start">
       <Field label="E-mail" error={errors.email?.message}>
         {(p) => <input {...p} type="email" className="field-input" {...form.register('email')} />}
       </Field>
@@ -136,7 +136,8 @@ function InviteForm({ onInvited }: { onInvited: () => void }) {
           </select>
         )}
       </Field>
-      <button type="submit" className="btn-primary" disabled={isSubmitting}>
+      {/* Fields line up at the top whatever messages sit under them; the button sits level with the inputs (below a label's height). */}
+      <button type="submit" className="btn-primary sm:mt-6" disabled={isSubmitting}>
         Invite
       </button>
       {result ? (

@@ -92,3 +92,25 @@ test('an admin invites a new account; the invitee sets a password from the e-mai
   await expect(guest.getByText('Signed in as Second-shift technician (technician)')).toBeVisible();
   await context.close();
 });
+
+test('an admin makes an API token: a missing name is named at its field; the token is shown once, works on the API, and can be revoked', async ({ page }) => {
+  await page.goto('/sign-in?next=%2Fadmin');
+  await page.getByLabel('E-mail').fill(DEMO.admin);
+  await page.getByLabel('Password').fill(DEMO_PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await expect(page.getByRole('heading', { name: 'Admin' })).toBeVisible();
+  await page.getByRole('button', { name: 'Create token' }).click();
+  await expect(page.getByLabel('Token name')).toHaveAttribute('aria-invalid', 'true');
+  await expect(page.getByTestId('new-token')).toHaveCount(0);
+  const name = `Lab balance feed ${Date.now()}`;
+  await page.getByLabel('Token name').fill(name);
+  await page.getByRole('button', { name: 'Create token' }).click();
+  const secret = (await page.getByTestId('new-token').textContent())!.trim();
+  expect(secret).toMatch(/^rbt_/);
+  await expect(page.getByLabel('Token name')).not.toHaveAttribute('aria-invalid', 'true');
+  const asToken = () => page.request.get('/api/v1/editions/current', { headers: { authorization: `Bearer ${secret}` } });
+  expect((await asToken()).status()).toBe(200);
+  await page.getByRole('button', { name: `Revoke ${name}` }).click();
+  await expect(page.getByRole('listitem').filter({ hasText: name }).getByText('revoked')).toBeVisible();
+  expect((await asToken()).status()).toBe(401);
+});
